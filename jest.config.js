@@ -1,0 +1,30 @@
+// Three kinds of test in one run: server and shared logic (ts-jest, real MariaDB),
+// client components (jest-expo web preset), and browser tests (playwright-core + chromium).
+const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
+const nodeTs = {
+  preset: 'ts-jest',
+  testEnvironment: 'node',
+  moduleNameMapper,
+  transform: { '^.+\\.tsx?$': ['ts-jest', { tsconfig: 'tsconfig.server.json' }] },
+};
+
+module.exports = {
+  projects: [
+    {
+      ...nodeTs,
+      displayName: 'server',
+      testMatch: ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/tests/shared/**/*.test.ts'],
+    },
+    {
+      displayName: 'components',
+      preset: 'jest-expo/web',
+      moduleNameMapper,
+      testMatch: ['<rootDir>/tests/components/**/*.test.tsx'],
+      setupFilesAfterEnv: ['<rootDir>/tests/helpers/components-setup.ts'],
+      transformIgnorePatterns: [
+        'node_modules/(?!((jest-)?react-native|@react-native(-community)?|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|react-native-svg|@tanstack/.*|standard-navigation))',
+      ],
+    },
+    { ...nodeTs, displayName: 'e2e', testMatch: ['<rootDir>/tests/e2e/**/*.test.ts'] },
+  ],
+};

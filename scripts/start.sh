@@ -1,0 +1,39 @@
+#!/usr/bin/env bash
+# npm start: install what is missing, start MariaDB and the local fakes, migrate, seed, serve.
+set -euo pipefail
+cd "$(dirname "$0")/.."
+source scripts/env.sh
+source scripts/provision.sh
+
+SERVER_PID=""
+cleanup() {
+  trap - EXIT INT TERM
+  [ -n "$SERVER_PID" ] && kill "$SERVER_PID" 2>/dev/null && wait "$SERVER_PID" 2>/dev/null
+  stop_fakes
+  stop_mariadb
+}
+trap cleanup EXIT INT TERM
+
+ensure_node_modules
+ensure_mariadb_installed
+start_mariadb
+create_database "$DB_NAME"
+migrate_and_seed
+start_fakes
+build_web_if_stale
+
+node --import tsx server/index.ts &
+SERVER_PID=$!
+wait_for_port "$PORT" "Sightline"
+cat <<TXT
+
+  Sightline is running at $APP_URL   (Ctrl-C stops the app, the fakes and MariaDB)
+
+  Demo sign-ins (Tallowmere Reality Capture, an invented demo firm; password for every account: sightline-demo)
+    technician  tess.okafor@tallowmere.test
+    reviewer    ravi.lindqvist@tallowmere.test
+    manager     mara.delacroix@tallowmere.test
+    admin       alex.brandt@tallowmere.test
+
+TXT
+wait "$SERVER_PID"

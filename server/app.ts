@@ -1,0 +1,84 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import connectSessionSequelize from 'connect-session-sequelize';
+import { config } from './config';
+import { passport } from './auth/passport';
+import { sequelize } from './models';
+import { requireSameOrigin } from './middleware/csrf';
+import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { apiRouters } from './routes';
+
+const SequelizeStore = connectSessionSequelize(session.Store);
+
+export function createSessionStore() {
+  return new SequelizeStore({
+    db: sequelize,
+    table: 'Session',
+    // Expired rows are removed by whichever instance runs next; harmless when several do.
+    checkExpirationInterval: config.isTest ? 0 : 15 * 60_000,
+    expiration: config.sessionMaxAgeHours * 3_600_000,
+    extendDefaultFields: (defaults: { data: string; expires: Date }, sess: { passport?: { user?: number } }) => ({
+      data: defaults.data,
+      expires: defaults.expires,
+      userId: sess.passport?.user ?? null,
+    }),
+  });
+}
+
+export function createApp(options: { webDir?: string } = {}) {
+  const app = express();
+  app.set('trust proxy', config.trustProxy);
+  app.disable('x-powered-by');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // react-native-web writes style tags at run time.
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+        },
+      },
+    }),
+  );
+  app.use(express.json({ limit: '1mb' }));
+
+  app.use(
+    '/api',
+    session({
+      name: 'sightline.sid',
+      secret: config.sessionSecret,
+      store: createSessionStore(),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: {
+        httpOnly: true,
+        sameSite: 'lax',
+        // Secure whenever the request arrived over HTTPS (directly or via a trusted proxy).
+        secure: 'auto',
+        maxAge: config.sessionMaxAgeHours * 3_600_000,
+      },
+    }),
+    passport.initialize(),
+    passport.session(),
+    requireSameOrigin,
+  );
+
+  for (const { prefix, router } of apiRouters) app.use(prefix, router);
+  app.use('/api', notFoundHandler);
+
+  const webDir = options.webDir ?? path.resolve(__dirname, '..', 'dist');
+  if (fs.existsSync(path.join(webDir, 'index.html'))) {
+    app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+    // Single-page app: every other path is a client route.
+    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(webDir, 'index.html')));
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,58 @@
+// The one place that reads the environment. Everything else imports `config`.
+// database.js reads the same DB_* variables for sequelize-cli.
+import crypto from 'node:crypto';
+
+const env = process.env;
+const nodeEnv = env.NODE_ENV ?? 'development';
+
+function number(name: string, fallback: number): number {
+  const raw = env[name];
+  if (raw === undefined || raw === '') return fallback;
+  const value = Number(raw);
+  if (!Number.isFinite(value)) throw new Error(`${name} must be a number, got "${raw}"`);
+  return value;
+}
+
+const sessionSecret = env.SESSION_SECRET ?? (nodeEnv === 'production' ? '' : 'sightline-local-session-secret');
+if (!sessionSecret) throw new Error('SESSION_SECRET must be set in production');
+
+export const config = {
+  env: nodeEnv,
+  isTest: nodeEnv === 'test',
+  host: env.HOST ?? '127.0.0.1',
+  port: number('PORT', 8080),
+  appUrl: env.APP_URL ?? `http://${env.HOST ?? '127.0.0.1'}:${env.PORT ?? 8080}`,
+  // Number of proxy hops to trust for X-Forwarded-* (0 when nothing sits in front).
+  trustProxy: number('TRUST_PROXY', 0),
+  sessionSecret,
+  sessionMaxAgeHours: number('SESSION_MAX_AGE_HOURS', 12),
+  db: {
+    host: env.DB_HOST ?? '127.0.0.1',
+    port: number('DB_PORT', 3407),
+    name: env.DB_NAME ?? 'sightline',
+    user: env.DB_USER ?? 'sightline',
+    password: env.DB_PASSWORD ?? 'sightline-local',
+  },
+  signInLimits: {
+    windowMinutes: number('SIGNIN_WINDOW_MINUTES', 15),
+    failuresPerAccount: number('SIGNIN_FAILURES_PER_ACCOUNT', 5),
+    failuresPerIp: number('SIGNIN_FAILURES_PER_IP', 30),
+  },
+  smtp: {
+    host: env.SMTP_HOST ?? '127.0.0.1',
+    port: number('SMTP_PORT', 2525),
+    from: env.MAIL_FROM ?? 'Sightline <no-reply@sightline.invalid>',
+  },
+  mailboxUrl: env.MAILBOX_URL ?? 'http://127.0.0.1:2580',
+  s3: {
+    endpoint: env.S3_ENDPOINT ?? 'http://127.0.0.1:4569',
+    region: env.S3_REGION ?? 'us-east-1',
+    bucket: env.S3_BUCKET ?? 'sightline-files',
+    accessKeyId: env.S3_ACCESS_KEY_ID ?? 'S3RVER',
+    secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? 'S3RVER',
+  },
+  uploadMaxBytes: number('UPLOAD_MAX_MB', 25) * 1024 * 1024,
+  instanceId: env.INSTANCE_ID ?? crypto.randomUUID(),
+};
+
+export type Config = typeof config;

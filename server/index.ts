@@ -1,0 +1,21 @@
+import { config } from './config';
+import { createApp } from './app';
+import { sequelize } from './models';
+
+async function main() {
+  await sequelize.authenticate();
+  const app = createApp();
+  const server = app.listen(config.port, config.host, () => {
+    console.log(`Sightline API and web app on http://${config.host}:${config.port}`);
+  });
+  const stop = () => {
+    server.close(() => sequelize.close().finally(() => process.exit(0)));
+  };
+  process.on('SIGTERM', stop);
+  process.on('SIGINT', stop);
+}
+
+main().catch((err) => {
+  console.error('Sightline could not start:', err);
+  process.exit(1);
+});

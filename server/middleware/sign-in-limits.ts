@@ -1,0 +1,38 @@
+import { rateLimit } from 'express-rate-limit';
+import type { Request, Response } from 'express';
+import { config } from '../config';
+import { MariaDbRateLimitStore } from './rate-limit-store';
+
+const windowMs = config.signInLimits.windowMinutes * 60_000;
+
+function refuse(_req: Request, res: Response) {
+  res.status(429).json({
+    error: {
+      code: 'too_many_attempts',
+      message: `Too many failed sign-in attempts. Try again in ${config.signInLimits.windowMinutes} minutes.`,
+    },
+  });
+}
+
+// Only failed attempts count, so a busy office behind one address is not locked out by
+// colleagues who type their password right.
+export const signInLimitPerIp = rateLimit({
+  windowMs,
+  limit: config.signInLimits.failuresPerIp,
+  skipSuccessfulRequests: true,
+  standardHeaders: 'draft-8',
+  legacyHeaders: false,
+  store: new MariaDbRateLimitStore('signin-ip'),
+  handler: refuse,
+});
+
+export const signInLimitPerAccount = rateLimit({
+  windowMs,
+  limit: config.signInLimits.failuresPerAccount,
+  skipSuccessfulRequests: true,
+  standardHeaders: false,
+  legacyHeaders: false,
+  store: new MariaDbRateLimitStore('signin-account'),
+  keyGenerator: (req) => String(req.body?.email ?? '').trim().toLowerCase() || 'blank',
+  handler: refuse,
+});

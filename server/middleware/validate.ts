@@ -1,0 +1,19 @@
+import type { NextFunction, Request, Response } from 'express';
+import { validationResult, type ValidationChain } from 'express-validator';
+import { invalid } from '../errors';
+
+// Runs express-validator chains and refuses the request with every failing field named,
+// before any route code (and so any write) runs.
+export function validate(...chains: ValidationChain[]) {
+  return async (req: Request, _res: Response, next: NextFunction) => {
+    for (const chain of chains) await chain.run(req);
+    const result = validationResult(req);
+    if (result.isEmpty()) return next();
+    const fields: Record<string, string> = {};
+    for (const error of result.array()) {
+      const name = error.type === 'field' ? error.path : error.type;
+      fields[name] ??= String(error.msg);
+    }
+    next(invalid(fields));
+  };
+}

@@ -1,0 +1,14 @@
+import type { Router } from 'express';
+import { healthRouter } from './health';
+import { meRouter } from './me';
+import { sessionRouter } from './session';
+import { usersRouter } from './users';
+
+// Every API router and where it is mounted. The route-access test walks this list, so a
+// new route cannot ship without an entry in its role table.
+export const apiRouters: { prefix: string; router: Router }[] = [
+  { prefix: '/api/health', router: healthRouter },
+  { prefix: '/api/session', router: sessionRouter },
+  { prefix: '/api/me', router: meRouter },
+  { prefix: '/api/users', router: usersRouter },
+];

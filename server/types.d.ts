@@ -1,0 +1,10 @@
+import type { SessionUser } from '../shared/api-types';
+
+declare global {
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/no-empty-object-type
+    interface User extends SessionUser {}
+  }
+}
+
+export {};

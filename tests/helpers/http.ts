@@ -1,0 +1,30 @@
+import type { Express } from 'express';
+import request from 'supertest';
+import { QueryTypes } from 'sequelize';
+import type { Role } from '../../shared/roles';
+import { sequelize } from '../../server/models';
+import { createUser, TEST_PASSWORD } from './factories';
+
+export type Agent = ReturnType<typeof request.agent>;
+
+// An agent that behaves like our client: it keeps the cookie and sends the CSRF header.
+export function clientAgent(app: Express): Agent {
+  return request.agent(app).set('x-sightline-request', '1') as unknown as Agent;
+}
+
+export async function signedInAgent(app: Express, role: Role) {
+  const user = await createUser({ role });
+  const agent = clientAgent(app);
+  const res = await agent.post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
+  if (res.status !== 200) throw new Error(`sign-in failed for ${role}: ${res.status} ${JSON.stringify(res.body)}`);
+  return { agent, user };
+}
+
+export async function resetSignInLimits() {
+  await sequelize.query('DELETE FROM rate_limit_hits', { type: QueryTypes.DELETE });
+}
+
+export async function countRows(table: string): Promise<number> {
+  const rows = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${table}\``, { type: QueryTypes.SELECT });
+  return Number(rows[0].n);
+}
