@@ -4,7 +4,7 @@ import { execFileSync } from 'node:child_process';
 import path from 'node:path';
 
 const root = path.resolve(__dirname, '..', '..');
-const env = { ...process.env, DB_NAME: `${process.env.DB_NAME ?? 'sightline_test'}_migrations` };
+const env = { ...process.env, DB_NAME: `${process.env.DB_NAME}_migrations` };
 const cli = (...args: string[]) =>
   execFileSync('node', ['--import', 'tsx', 'node_modules/sequelize-cli/lib/sequelize', ...args], { cwd: root, env, encoding: 'utf8' });
 

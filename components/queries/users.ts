@@ -1,0 +1,32 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { UserRow } from '@/shared/api-types';
+import type { Role } from '@/shared/roles';
+import { api } from '@/components/lib/api-client';
+
+export const userKeys = { root: ['users'] as const, list: () => [...userKeys.root, 'list'] as const };
+
+export function useUsersQuery() {
+  return useQuery({
+    queryKey: userKeys.list(),
+    queryFn: async () => (await api.get<{ users: UserRow[] }>('/api/users')).users,
+  });
+}
+
+export type NewUser = { name: string; email: string; role: Role; password: string };
+
+export function useUserCreateMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: NewUser) => api.post<{ user: UserRow }>('/api/users', input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.root }),
+  });
+}
+
+export function useUserUpdateMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...changes }: { id: number; role?: Role; active?: boolean }) =>
+      api.patch<{ user: UserRow }>(`/api/users/${id}`, changes),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.root }),
+  });
+}

@@ -1,0 +1,130 @@
+// A sortable table built on @tanstack/react-table (v9), rendered with react-native views so
+// it works on phone and desktop. On narrow screens it scrolls sideways.
+import {
+  createSortedRowModel,
+  flexRender,
+  rowSortingFeature,
+  sortFns,
+  tableFeatures,
+  useTable,
+  type ColumnDef,
+  type SortingState,
+} from '@tanstack/react-table';
+import { useMemo, useState } from 'react';
+import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+import { Text } from './text';
+import { colors, fonts, space } from './theme';
+
+export const dataTableFeatures = tableFeatures({
+  rowSortingFeature,
+  sortedRowModel: createSortedRowModel(),
+  sortFns,
+});
+
+export type DataTableColumn<T> = ColumnDef<typeof dataTableFeatures, T> & { meta?: { width?: number } };
+
+type Props<T> = {
+  label: string;
+  columns: DataTableColumn<T>[];
+  data: T[];
+  emptyText: string;
+  initialSorting?: SortingState;
+  getRowId?: (row: T) => string;
+  onRowPress?: (row: T) => void;
+};
+
+const SORT_WORD = { asc: 'ascending', desc: 'descending' } as const;
+
+export function DataTable<T>({ label, columns, data, emptyText, initialSorting = [], getRowId, onRowPress }: Props<T>) {
+  const [sorting, setSorting] = useState<SortingState>(initialSorting);
+  const withTextCells = useMemo(
+    () => columns.map((column) => (column.cell ? column : { ...column, cell: (info: { getValue: () => unknown }) => plainCell(info.getValue()) })),
+    [columns],
+  );
+  const table = useTable({
+    features: dataTableFeatures,
+    columns: withTextCells as DataTableColumn<T>[],
+    data,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getRowId: getRowId ? (row: T) => getRowId(row) : undefined,
+  });
+
+  const width = (meta: unknown) => (meta as { width?: number } | undefined)?.width ?? 160;
+
+  return (
+    <ScrollView horizontal contentContainerStyle={{ flexGrow: 1 }}>
+      <View role="table" aria-label={label} style={styles.table}>
+        {table.getHeaderGroups().map((group) => (
+          <View role="row" key={group.id} style={[styles.row, styles.headerRow]}>
+            {group.headers.map((header) => {
+              const sorted = header.column.getIsSorted();
+              const title = flexRender(header.column.columnDef.header, header.getContext());
+              const canSort = header.column.getCanSort();
+              return (
+                <View role="columnheader" key={header.id} style={[styles.cell, { width: width(header.column.columnDef.meta) }]}
+                  aria-sort={sorted ? SORT_WORD[sorted] : 'none'}>
+                  {canSort ? (
+                    <Pressable
+                      role="button"
+                      accessibilityLabel={`Sort by ${String(header.column.columnDef.header)}`}
+                      onPress={header.column.getToggleSortingHandler()}
+                    >
+                      <Text style={styles.headerText}>
+                        {title}
+                        {sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}
+                      </Text>
+                    </Pressable>
+                  ) : (
+                    <Text style={styles.headerText}>{title}</Text>
+                  )}
+                </View>
+              );
+            })}
+          </View>
+        ))}
+        {table.getRowModel().rows.length === 0 ? (
+          <View role="row" style={styles.row}>
+            <View role="cell" style={styles.cell}>
+              <Text variant="muted">{emptyText}</Text>
+            </View>
+          </View>
+        ) : (
+          table.getRowModel().rows.map((row) => {
+            const cells = row.getAllCells().map((cell) => (
+              <View role="cell" key={cell.id} style={[styles.cell, { width: width(cell.column.columnDef.meta) }]}>
+                {renderCell(flexRender(cell.column.columnDef.cell, cell.getContext()))}
+              </View>
+            ));
+            return onRowPress ? (
+              <Pressable role="row" key={row.id} onPress={() => onRowPress(row.original)} style={({ focused }: { focused?: boolean }) => [styles.row, focused && styles.focused]}>
+                {cells}
+              </Pressable>
+            ) : (
+              <View role="row" key={row.id} style={styles.row}>
+                {cells}
+              </View>
+            );
+          })
+        )}
+      </View>
+    </ScrollView>
+  );
+}
+
+function plainCell(value: unknown) {
+  return <Text variant="small">{value === null || value === undefined ? '' : String(value)}</Text>;
+}
+
+function renderCell(content: React.ReactNode) {
+  return typeof content === 'string' || typeof content === 'number' ? plainCell(content) : content;
+}
+
+const styles = StyleSheet.create({
+  table: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, backgroundColor: colors.surface, minWidth: '100%' },
+  row: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: colors.line, minHeight: 44, alignItems: 'center' },
+  headerRow: { backgroundColor: colors.paper },
+  cell: { paddingHorizontal: space.md, paddingVertical: space.sm, flexGrow: 1 },
+  headerText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
+  focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid' } as object,
+});

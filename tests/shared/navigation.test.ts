@@ -1,0 +1,20 @@
+import { canOpen, homeFor, navFor } from '../../shared/navigation';
+import { ROLES } from '../../shared/roles';
+
+describe('role navigation', () => {
+  it('lands each role on its own home', () => {
+    expect(homeFor('technician')).toBe('/jobs');
+    expect(homeFor('reviewer')).toBe('/queue');
+    expect(homeFor('manager')).toBe('/trends');
+    expect(homeFor('admin')).toBe('/admin/users');
+  });
+
+  it('lists each role\'s home in its menu', () => {
+    for (const role of ROLES) expect(canOpen(role, homeFor(role))).toBe(true);
+  });
+
+  it('keeps the user admin page away from everyone but admins', () => {
+    expect(ROLES.filter((role) => canOpen(role, '/admin/users'))).toEqual(['admin']);
+    expect(navFor('technician').map((i) => i.label)).toEqual(['My jobs']);
+  });
+});
