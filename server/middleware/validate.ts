@@ -11,7 +11,8 @@ export function validate(...chains: ValidationChain[]) {
     if (result.isEmpty()) return next();
     const fields: Record<string, string> = {};
     for (const error of result.array()) {
-      const name = error.type === 'field' ? error.path : error.type;
+      // rooms[0].name → rooms.0.name, the form library's and the pre-submit checks' spelling.
+      const name = error.type === 'field' ? error.path.replace(/\[(\d+)\]/g, '.$1') : error.type;
       fields[name] ??= String(error.msg);
     }
     next(invalid(fields));

@@ -1,7 +1,10 @@
 import type { Router } from 'express';
+import { filesRouter } from './files';
 import { healthRouter } from './health';
+import { jobsRouter } from './jobs';
 import { meRouter } from './me';
 import { sessionRouter } from './session';
+import { techniciansRouter } from './technicians';
 import { usersRouter } from './users';
 
 // Every API router and where it is mounted. The route-access test walks this list, so a
@@ -11,4 +14,7 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api/session', router: sessionRouter },
   { prefix: '/api/me', router: meRouter },
   { prefix: '/api/users', router: usersRouter },
+  { prefix: '/api/technicians', router: techniciansRouter },
+  { prefix: '/api/jobs', router: jobsRouter },
+  { prefix: '/api/files', router: filesRouter },
 ];

@@ -28,3 +28,17 @@ export async function countRows(table: string): Promise<number> {
   const rows = await sequelize.query<{ n: number }>(`SELECT COUNT(*) AS n FROM \`${table}\``, { type: QueryTypes.SELECT });
   return Number(rows[0].n);
 }
+
+export type Sent = { status: number; body: any; headers: Record<string, string> };
+
+// One call by method name, for the table-driven tests.
+export type Upload = { field: string; buffer: Buffer; filename: string; fields: Record<string, string> };
+
+export async function send(agent: Agent, method: string, path: string, body?: object, upload?: Upload): Promise<Sent> {
+  const call = (agent as unknown as Record<string, (p: string) => request.Test>)[method.toLowerCase()](path);
+  if (upload) {
+    for (const [name, value] of Object.entries(upload.fields)) call.field(name, value);
+    return call.attach(upload.field, upload.buffer, upload.filename) as unknown as Promise<Sent>;
+  }
+  return (body ? call.send(body) : call) as unknown as Promise<Sent>;
+}

@@ -3,8 +3,10 @@
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/models';
 import type { Role } from '../../shared/roles';
-import { createUser } from '../helpers/factories';
-import { countRows, resetSignInLimits, signedInAgent } from '../helpers/http';
+import { createJob, createUser } from '../helpers/factories';
+import { completeRecord } from '../helpers/records';
+import { PNG_1X1 } from '../helpers/sample-files';
+import { countRows, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
 import { registeredRoutes } from '../helpers/route-walk';
 
 type BadInputCase = {
@@ -13,6 +15,7 @@ type BadInputCase = {
   tables: string[];
   prepare?: (me: { id: number }) => Promise<{ path?: string }>;
   body: object;
+  upload?: Upload;
   fields: string[];
 };
 
@@ -29,7 +32,60 @@ const CASES: Record<string, BadInputCase> = {
     body: { role: 'chief', active: 'yes' },
     fields: ['active', 'role'],
   },
+  'POST /api/jobs': {
+    as: 'manager',
+    tables: ['jobs', 'capture_drafts'],
+    body: { claimReference: 'x', street: '', city: 'B', postcode: '', propertyType: 'castle', lossType: 'flood', lossDate: '2099-01-01', siteVisitDate: '11/02/2026', dueAt: 'soon', priority: 'asap', technicianId: 'tess' },
+    fields: ['city', 'claimReference', 'dueAt', 'lossDate', 'lossType', 'postcode', 'priority', 'propertyType', 'siteVisitDate', 'street', 'technicianId'],
+  },
+  'PATCH /api/jobs/:id': {
+    as: 'manager',
+    tables: ['jobs'],
+    prepare: async () => ({ path: `/api/jobs/${(await createJob()).id}` }),
+    body: { priority: 'whenever', dueAt: 'tomorrow-ish' },
+    fields: ['dueAt', 'priority'],
+  },
+  'PUT /api/jobs/:id/record': {
+    as: 'technician',
+    tables: ['capture_drafts', 'capture_revisions'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/record` }),
+    body: badRecord(),
+    fields: ['cameraClass', 'exteriorStations', 'rooms.0.reflective.0', 'rooms.0.stations', 'units'],
+  },
+  'POST /api/jobs/:id/submit': {
+    as: 'technician',
+    tables: ['capture_revisions'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/submit` }),
+    body: badRecord(),
+    fields: ['cameraClass', 'exteriorStations', 'rooms.0.reflective.0', 'rooms.0.stations', 'units'],
+  },
+  'POST /api/jobs/:id/files': {
+    as: 'technician',
+    tables: ['files'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/files` }),
+    body: {},
+    upload: { field: 'file', buffer: PNG_1X1, filename: 'a.png', fields: { kind: 'selfie' } },
+    fields: ['kind'],
+  },
+  'DELETE /api/jobs/:id/files/:fileId': {
+    as: 'technician',
+    tables: ['files'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/files/first` }),
+    body: {},
+    fields: ['fileId'],
+  },
 };
+
+// Wrong unit, unknown camera class, negative and oversized counts, more flagged than found.
+function badRecord() {
+  return {
+    ...completeRecord(),
+    units: 'cubits',
+    cameraClass: 'pinhole',
+    exteriorStations: -2,
+    rooms: [{ ...completeRecord().rooms[0], stations: 9999, reflective: [{ kind: 'mirror', found: 1, flagged: 3 }] }],
+  };
+}
 
 const app = createApp();
 afterAll(async () => {
@@ -51,7 +107,7 @@ describe('bad input on write routes', () => {
       const agent = signed?.agent ?? request.agent(app).set('x-sightline-request', '1');
       const path = (spec.prepare && signed ? (await spec.prepare(signed.user)).path : undefined) ?? pattern;
       const before = await Promise.all(spec.tables.map(countRows));
-      const res = await (agent as unknown as Record<string, (p: string) => { send: (b: object) => Promise<{ status: number; body: { error: { fields: object } } }> }>)[method.toLowerCase()](path).send(spec.body);
+      const res = await send(agent as Agent, method, path, spec.body, spec.upload);
       expect(res.status).toBe(400);
       expect(Object.keys(res.body.error.fields).sort()).toEqual(spec.fields);
       expect(await Promise.all(spec.tables.map(countRows))).toEqual(before);

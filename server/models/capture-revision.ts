@@ -1,0 +1,33 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import type { CaptureRecord } from '../../shared/capture-record';
+import type { StoredFile } from '../../shared/files';
+import type { CheckResult } from '../../shared/pre-submit-checks';
+import { parseJson } from './capture-draft';
+
+// Immutable once written (a database trigger refuses updates).
+export class CaptureRevision extends Model<InferAttributes<CaptureRevision>, InferCreationAttributes<CaptureRevision>> {
+  declare id: CreationOptional<number>;
+  declare jobId: number;
+  declare number: number;
+  declare data: CaptureRecord;
+  declare files: StoredFile[];
+  declare findings: CheckResult;
+  declare submittedById: number;
+  declare submittedAt: Date;
+
+  static initModel(sequelize: Sequelize) {
+    CaptureRevision.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        jobId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        number: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        data: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('data')); } },
+        files: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('files')); } },
+        findings: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('findings')); } },
+        submittedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
+        submittedAt: { type: DataTypes.DATE(3), allowNull: false },
+      },
+      { sequelize, tableName: 'capture_revisions', timestamps: false },
+    );
+  }
+}

@@ -1,0 +1,45 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import { JOB_STATUSES, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES, type JobStatus, type LossType, type Priority, type PropertyType } from '../../shared/jobs';
+import type { User } from './user';
+
+export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
+  declare id: CreationOptional<number>;
+  declare claimReference: string;
+  declare street: string;
+  declare city: string;
+  declare postcode: string;
+  declare propertyType: PropertyType;
+  declare lossType: LossType;
+  declare lossDate: string;
+  declare siteVisitDate: string | null;
+  declare dueAt: Date;
+  declare priority: CreationOptional<Priority>;
+  declare status: CreationOptional<JobStatus>;
+  declare technicianId: ForeignKey<User['id']>;
+  declare createdById: ForeignKey<User['id']> | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+  declare technician?: NonAttribute<User>;
+
+  static initModel(sequelize: Sequelize) {
+    Job.init(
+      {
+        id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
+        claimReference: { type: DataTypes.STRING(40), allowNull: false, unique: true },
+        street: { type: DataTypes.STRING(160), allowNull: false },
+        city: { type: DataTypes.STRING(80), allowNull: false },
+        postcode: { type: DataTypes.STRING(16), allowNull: false },
+        propertyType: { type: DataTypes.ENUM(...PROPERTY_TYPES), allowNull: false },
+        lossType: { type: DataTypes.ENUM(...LOSS_TYPES), allowNull: false },
+        lossDate: { type: DataTypes.DATEONLY, allowNull: false },
+        siteVisitDate: { type: DataTypes.DATEONLY, allowNull: true },
+        dueAt: { type: DataTypes.DATE(3), allowNull: false },
+        priority: { type: DataTypes.ENUM(...PRIORITIES), allowNull: false, defaultValue: 'normal' },
+        status: { type: DataTypes.ENUM(...JOB_STATUSES), allowNull: false, defaultValue: 'draft' },
+        createdAt: DataTypes.DATE(3),
+        updatedAt: DataTypes.DATE(3),
+      },
+      { sequelize, tableName: 'jobs' },
+    );
+  }
+}

@@ -1,0 +1,101 @@
+import { Router } from 'express';
+import multer from 'multer';
+import { body, param, query } from 'express-validator';
+import type { CaptureRecord } from '../../shared/capture-record';
+import { FILE_KINDS, type FileKind } from '../../shared/files';
+import { JOB_STATUSES, type JobStatus } from '../../shared/jobs';
+import { config } from '../config';
+import { HttpError } from '../errors';
+import { requireRole } from '../middleware/require-auth';
+import { validate } from '../middleware/validate';
+import { captureRecordRules } from '../validators/capture-record';
+import { jobCreateRules, jobUpdateRules } from '../validators/job';
+import { getRevision, saveDraft, submitRecord } from '../services/capture-record-service';
+import { detachFile, uploadFile } from '../services/files-service';
+import { createJob, getJobDetail, listJobs, updateJob } from '../services/jobs-service';
+
+export const jobsRouter = Router();
+
+const jobId = param('id', 'Must be a job id').isInt({ min: 1 }).toInt();
+const anyJobReader = requireRole('technician', 'reviewer', 'manager', 'admin');
+const jobManagers = requireRole('manager', 'admin');
+const technicianOnly = requireRole('technician');
+
+jobsRouter.get(
+  '/',
+  anyJobReader,
+  validate(
+    query('status', `Choose from: ${JOB_STATUSES.join(', ')}`).optional().isString()
+      .custom((v: string) => v.split(',').every((s) => (JOB_STATUSES as readonly string[]).includes(s))),
+    query('technicianId', 'Must be a user id').optional().isInt({ min: 1 }).toInt(),
+  ),
+  async (req, res) => {
+    const status = typeof req.query.status === 'string' ? (req.query.status.split(',') as JobStatus[]) : undefined;
+    const technicianId = req.query.technicianId ? Number(req.query.technicianId) : undefined;
+    res.json({ jobs: await listJobs(req.user!, { status, technicianId }) });
+  },
+);
+
+jobsRouter.post('/', jobManagers, validate(...jobCreateRules), async (req, res) => {
+  res.status(201).json({ job: await createJob(req.user!, { siteVisitDate: null, ...req.body }) });
+});
+
+jobsRouter.get('/:id', anyJobReader, validate(jobId), async (req, res) => {
+  res.json(await getJobDetail(req.user!, Number(req.params.id)));
+});
+
+jobsRouter.patch('/:id', jobManagers, validate(jobId, ...jobUpdateRules), async (req, res) => {
+  const { technicianId, dueAt, priority, siteVisitDate } = req.body;
+  res.json({ job: await updateJob(req.user!, Number(req.params.id), { technicianId, dueAt, priority, siteVisitDate }) });
+});
+
+jobsRouter.put('/:id/record', technicianOnly, validate(jobId, ...captureRecordRules), async (req, res) => {
+  res.json(await saveDraft(req.user!, Number(req.params.id), req.body as CaptureRecord));
+});
+
+jobsRouter.post('/:id/submit', technicianOnly, validate(jobId, ...captureRecordRules), async (req, res) => {
+  res.status(201).json(await submitRecord(req.user!, Number(req.params.id), req.body as CaptureRecord));
+});
+
+jobsRouter.get(
+  '/:id/revisions/:number',
+  anyJobReader,
+  validate(jobId, param('number', 'Must be a revision number').isInt({ min: 1 }).toInt()),
+  async (req, res) => {
+    res.json({ revision: await getRevision(req.user!, Number(req.params.id), Number(req.params.number)) });
+  },
+);
+
+// Uploads are held in memory only long enough to check and hash them, then go to S3.
+const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.uploadMaxBytes, files: 1 } });
+const singleFile = (req: Parameters<ReturnType<typeof upload.single>>[0], res: Parameters<ReturnType<typeof upload.single>>[1], next: (err?: unknown) => void) =>
+  upload.single('file')(req, res, (err: unknown) => {
+    if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
+      return next(new HttpError(413, 'too_large', `Files may be at most ${config.uploadMaxBytes / 1024 / 1024} MB.`, { file: 'Too large' }));
+    }
+    next(err);
+  });
+
+jobsRouter.post(
+  '/:id/files',
+  technicianOnly,
+  singleFile,
+  validate(
+    jobId,
+    body('kind', `Choose one of: ${FILE_KINDS.join(', ')}`).isIn(FILE_KINDS),
+    body('file', 'Choose a file to upload').custom((_v, { req }) => Boolean(req.file && req.file.size > 0)),
+  ),
+  async (req, res) => {
+    res.status(201).json({ file: await uploadFile(req.user!, Number(req.params.id), req.body.kind as FileKind, req.file!) });
+  },
+);
+
+jobsRouter.delete(
+  '/:id/files/:fileId',
+  technicianOnly,
+  validate(jobId, param('fileId', 'Must be a file id').isInt({ min: 1 }).toInt()),
+  async (req, res) => {
+    await detachFile(req.user!, Number(req.params.id), Number(req.params.fileId));
+    res.status(204).end();
+  },
+);

@@ -1,0 +1,10 @@
+import { Router } from 'express';
+import { requireRole } from '../middleware/require-auth';
+import { listTechnicians } from '../services/jobs-service';
+
+export const techniciansRouter = Router();
+
+// For the assignment form: active technicians by name.
+techniciansRouter.get('/', requireRole('manager', 'admin'), async (_req, res) => {
+  res.json({ technicians: await listTechnicians() });
+});

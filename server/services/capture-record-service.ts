@@ -1,0 +1,86 @@
+import { Op } from 'sequelize';
+import type { CaptureRecord } from '../../shared/capture-record';
+import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
+import { checkCaptureRecord } from '../../shared/pre-submit-checks';
+import { conflict, invalid, notFound } from '../errors';
+import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models';
+import { assertAssignedTechnician, findJobFor } from './job-access';
+
+type Actor = Express.User;
+
+function assertEditable(status: (typeof EDITABLE_STATUSES)[number] | string) {
+  if (!(EDITABLE_STATUSES as string[]).includes(status)) {
+    throw conflict(`The capture record cannot be changed while the job is "${JOB_STATUS_LABELS[status as keyof typeof JOB_STATUS_LABELS]}".`);
+  }
+}
+
+async function assertPhotosBelongToJob(jobId: number, record: CaptureRecord, transaction?: import('sequelize').Transaction) {
+  const ids = [...new Set(record.damageAreas.flatMap((a) => a.photoFileIds))];
+  if (ids.length === 0) return;
+  const found = await StoredFile.count({ where: { jobId, id: { [Op.in]: ids }, kind: 'photo', detachedAt: null }, transaction });
+  if (found !== ids.length) {
+    const index = record.damageAreas.findIndex((a) => a.photoFileIds.length > 0);
+    throw invalid({ [`damageAreas.${index}.photoFileIds`]: 'A photo is not attached to this job' });
+  }
+}
+
+// Autosave: accepts an incomplete record (required facts are checked at submit), but never
+// a malformed one (the route validates types, ranges and enums first).
+export async function saveDraft(actor: Actor, jobId: number, record: CaptureRecord) {
+  return sequelize.transaction(async (transaction) => {
+    const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
+    assertAssignedTechnician(actor, job);
+    assertEditable(job.status);
+    const draft = await CaptureDraft.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (draft) {
+      draft.data = record;
+      draft.version += 1;
+      draft.changed('data', true);
+      await draft.save({ transaction });
+      return { version: draft.version, savedAt: draft.updatedAt.toISOString() };
+    }
+    const created = await CaptureDraft.create({ jobId, data: record }, { transaction });
+    return { version: created.version, savedAt: created.updatedAt.toISOString() };
+  });
+}
+
+// Freezes the record as the next immutable revision and hands the job to review.
+export async function submitRecord(actor: Actor, jobId: number, record: CaptureRecord) {
+  return sequelize.transaction(async (transaction) => {
+    const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
+    assertAssignedTechnician(actor, job);
+    assertEditable(job.status);
+
+    const findings = checkCaptureRecord(record);
+    if (findings.missing.length > 0) {
+      throw invalid(Object.fromEntries(findings.missing.map((f) => [f.field, f.message])));
+    }
+    await assertPhotosBelongToJob(jobId, record, transaction);
+
+    const files = await StoredFile.findAll({ where: { jobId, detachedAt: null }, order: [['id', 'ASC']], transaction });
+    const previous = (await CaptureRevision.max('number', { where: { jobId }, transaction })) as number | null;
+    const number = (previous ?? 0) + 1;
+    const submittedAt = new Date();
+    await CaptureRevision.create(
+      { jobId, number, data: record, files: files.map((f) => f.toView()), findings, submittedById: actor.id, submittedAt },
+      { transaction },
+    );
+    await CaptureDraft.upsert({ jobId, data: record }, { transaction });
+    job.status = number === 1 ? 'submitted' : 'resubmitted';
+    await job.save({ transaction });
+    return { revision: number, status: job.status, submittedAt: submittedAt.toISOString(), warnings: findings.warnings };
+  });
+}
+
+export async function getRevision(actor: Actor, jobId: number, number: number) {
+  await findJobFor(actor, jobId);
+  const revision = await CaptureRevision.findOne({ where: { jobId, number } });
+  if (!revision) throw notFound('Revision');
+  return {
+    number: revision.number,
+    submittedAt: revision.submittedAt.toISOString(),
+    record: revision.data,
+    files: revision.files,
+    findings: revision.findings,
+  };
+}

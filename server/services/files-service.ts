@@ -1,0 +1,72 @@
+import crypto from 'node:crypto';
+import { fromBuffer } from 'file-type';
+import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, type FileKind } from '../../shared/files';
+import { HttpError, invalid, notFound } from '../errors';
+import { StoredFile } from '../models';
+import { deleteObject, getObjectStream, putObject } from '../storage/s3';
+import { assertAssignedTechnician, findJobFor } from './job-access';
+
+type Actor = Express.User;
+
+// The file's type is read from its bytes; the name and the browser's claim are ignored.
+export async function sniffContentType(buffer: Buffer): Promise<string | null> {
+  const detected = await fromBuffer(buffer);
+  if (detected) return detected.mime;
+  return looksLikeCsv(buffer) ? 'text/csv' : null;
+}
+
+function looksLikeCsv(buffer: Buffer) {
+  const text = buffer.toString('utf8');
+  if (text.includes('\uFFFD') || /[\x00-\x08\x0E-\x1F]/.test(text)) return false;
+  const firstLine = text.split(/\r?\n/, 1)[0] ?? '';
+  return firstLine.includes(',') && text.length > 0;
+}
+
+export async function uploadFile(actor: Actor, jobId: number, kind: FileKind, upload: { originalname: string; buffer: Buffer }) {
+  const job = await findJobFor(actor, jobId);
+  assertAssignedTechnician(actor, job);
+  const contentType = await sniffContentType(upload.buffer);
+  if (!contentType || !ACCEPTED_TYPES[kind].includes(contentType)) {
+    throw invalid({ file: `A ${FILE_KIND_LABELS[kind].toLowerCase()} must be ${ACCEPTED_DESCRIPTION[kind]}; this file's content is ${contentType ?? 'not a recognised type'}.` });
+  }
+  const sha256 = crypto.createHash('sha256').update(upload.buffer).digest('hex');
+  const storageKey = `jobs/${jobId}/${crypto.randomUUID()}`;
+  await putObject(storageKey, upload.buffer, contentType, sha256);
+  try {
+    const file = await StoredFile.create({
+      jobId,
+      kind,
+      originalName: upload.originalname.slice(0, 255) || 'upload',
+      contentType,
+      sizeBytes: upload.buffer.length,
+      sha256,
+      storageKey,
+      uploadedById: actor.id,
+      detachedAt: null,
+    });
+    return file.toView();
+  } catch (error) {
+    // Leave no orphan object behind when the row cannot be written.
+    await deleteObject(storageKey).catch(() => undefined);
+    throw error;
+  }
+}
+
+export async function openFile(actor: Actor, fileId: number) {
+  const file = await StoredFile.findByPk(fileId);
+  if (!file) throw notFound('File');
+  await findJobFor(actor, file.jobId);
+  try {
+    return { file, stream: await getObjectStream(file.storageKey) };
+  } catch {
+    throw new HttpError(503, 'storage_unavailable', 'File storage cannot be reached right now. Please try again.');
+  }
+}
+
+export async function detachFile(actor: Actor, jobId: number, fileId: number) {
+  const job = await findJobFor(actor, jobId);
+  assertAssignedTechnician(actor, job);
+  const file = await StoredFile.findOne({ where: { id: fileId, jobId, detachedAt: null } });
+  if (!file) throw notFound('File');
+  await file.update({ detachedAt: new Date() });
+}

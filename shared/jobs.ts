@@ -1,0 +1,79 @@
+// Job vocabulary shared by client, server, migrations and seeders.
+export const JOB_STATUSES = ['draft', 'submitted', 'in_review', 'rework_requested', 'resubmitted', 'accepted', 'recapture_required'] as const;
+export type JobStatus = (typeof JOB_STATUSES)[number];
+
+export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
+  draft: 'Draft',
+  submitted: 'Submitted',
+  in_review: 'In review',
+  rework_requested: 'Rework requested',
+  resubmitted: 'Resubmitted',
+  accepted: 'Accepted',
+  recapture_required: 'Recapture required',
+};
+
+// States in which the technician may still edit and submit the capture record.
+export const EDITABLE_STATUSES: JobStatus[] = ['draft', 'rework_requested'];
+
+export const PROPERTY_TYPES = ['single_family', 'townhouse', 'condo_unit', 'manufactured_home'] as const;
+export type PropertyType = (typeof PROPERTY_TYPES)[number];
+export const PROPERTY_TYPE_LABELS: Record<PropertyType, string> = {
+  single_family: 'Single-family',
+  townhouse: 'Townhouse',
+  condo_unit: 'Condo unit',
+  manufactured_home: 'Manufactured home',
+};
+
+export const LOSS_TYPES = ['water', 'fire', 'smoke', 'wind', 'hail', 'other'] as const;
+export type LossType = (typeof LOSS_TYPES)[number];
+export const LOSS_TYPE_LABELS: Record<LossType, string> = {
+  water: 'Water', fire: 'Fire', smoke: 'Smoke', wind: 'Wind', hail: 'Hail', other: 'Other',
+};
+
+export const PRIORITIES = ['normal', 'urgent', 'catastrophe'] as const;
+export type Priority = (typeof PRIORITIES)[number];
+export const PRIORITY_LABELS: Record<Priority, string> = {
+  normal: 'Normal',
+  urgent: 'Urgent',
+  catastrophe: 'Catastrophe event',
+};
+
+export type JobSummary = {
+  id: number;
+  claimReference: string;
+  street: string;
+  city: string;
+  postcode: string;
+  propertyType: PropertyType;
+  lossType: LossType;
+  lossDate: string;
+  siteVisitDate: string | null;
+  dueAt: string;
+  priority: Priority;
+  status: JobStatus;
+  technician: { id: number; name: string };
+  revisionCount: number;
+};
+
+// "Overdue by 2 days" / "Due in 5 hours": time left in words, never colour alone.
+export function describeDue(dueAt: string | Date, now: Date, finished: boolean): { overdue: boolean; text: string } {
+  const due = new Date(dueAt).getTime();
+  const diff = due - now.getTime();
+  if (finished) return { overdue: false, text: 'Delivered' };
+  const span = humanSpan(Math.abs(diff));
+  return diff < 0 ? { overdue: true, text: `Overdue by ${span}` } : { overdue: false, text: `Due in ${span}` };
+}
+
+export function humanSpan(ms: number): string {
+  const minutes = Math.round(ms / 60_000);
+  if (minutes < 60) return plural(Math.max(minutes, 1), 'minute');
+  const hours = Math.round(minutes / 60);
+  if (hours < 48) return plural(hours, 'hour');
+  return plural(Math.round(hours / 24), 'day');
+}
+
+function plural(n: number, word: string) {
+  return `${n} ${word}${n === 1 ? '' : 's'}`;
+}
+
+export const FINISHED_STATUSES: JobStatus[] = ['accepted', 'recapture_required'];

@@ -1,0 +1,106 @@
+import crypto from 'node:crypto';
+import { createApp } from '../../server/app';
+import { sequelize, StoredFile } from '../../server/models';
+import { createJob } from '../helpers/factories';
+import { clientAgent, countRows, resetSignInLimits, signedInAgent } from '../helpers/http';
+import { EXE_AS_JPG, JPEG_HEADER, PDF_MINIMAL, PNG_1X1, STATION_CSV } from '../helpers/sample-files';
+
+const app = createApp();
+afterAll(async () => {
+  await resetSignInLimits();
+  await sequelize.close();
+});
+
+async function technicianWithJob() {
+  const signed = await signedInAgent(app, 'technician');
+  const job = await createJob({ technicianId: signed.user.id });
+  return { ...signed, job };
+}
+
+const sha256 = (b: Buffer) => crypto.createHash('sha256').update(b).digest('hex');
+
+describe('POST /api/jobs/:id/files', () => {
+  it('stores a photo in object storage with its size and SHA-256', async () => {
+    const { agent, job } = await technicianWithJob();
+    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'kitchen ceiling.png');
+    expect(res.status).toBe(201);
+    expect(res.body.file).toMatchObject({ kind: 'photo', name: 'kitchen ceiling.png', contentType: 'image/png', sizeBytes: PNG_1X1.length, sha256: sha256(PNG_1X1) });
+    const detail = await agent.get(`/api/jobs/${job.id}`);
+    expect(detail.body.files.map((f: { id: number }) => f.id)).toEqual([res.body.file.id]);
+  });
+
+  it.each([
+    ['photo', JPEG_HEADER, 'a.jpg', 'image/jpeg'],
+    ['sketch', PDF_MINIMAL, 'plan.pdf', 'application/pdf'],
+    ['sketch', PNG_1X1, 'plan.png', 'image/png'],
+    ['station_coordinates', STATION_CSV, 'stations.csv', 'text/csv'],
+  ])('accepts a %s whose content is %s', async (kind, buffer, name, type) => {
+    const { agent, job } = await technicianWithJob();
+    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', kind as string).attach('file', buffer as Buffer, name as string);
+    expect(res.status).toBe(201);
+    expect(res.body.file.contentType).toBe(type);
+  });
+
+  it.each([
+    ['an executable named .jpg', 'photo', EXE_AS_JPG, 'holiday.jpg'],
+    ['a PDF offered as a photo', 'photo', PDF_MINIMAL, 'photo.jpg'],
+    ['a photo offered as a coordinate file', 'station_coordinates', PNG_1X1, 'stations.csv'],
+  ])('refuses %s by its content and writes nothing', async (_label, kind, buffer, name) => {
+    const { agent, job } = await technicianWithJob();
+    const before = await countRows('files');
+    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', kind as string).attach('file', buffer as Buffer, name as string);
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toHaveProperty('file');
+    expect(await countRows('files')).toBe(before);
+  });
+
+  it('refuses a file over the size limit with 413', async () => {
+    const { agent, job } = await technicianWithJob();
+    const big = Buffer.concat([PNG_1X1, Buffer.alloc(26 * 1024 * 1024)]);
+    const before = await countRows('files');
+    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', big, 'huge.png');
+    expect(res.status).toBe(413);
+    expect(res.body.error.fields).toEqual({ file: 'Too large' });
+    expect(await countRows('files')).toBe(before);
+  });
+
+  it('asks for a file when none is sent', async () => {
+    const { agent, job } = await technicianWithJob();
+    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo');
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({ file: 'Choose a file to upload' });
+  });
+});
+
+describe('GET /api/files/:id', () => {
+  it('serves the stored bytes to the job\'s technician and to a reviewer, and to no one else', async () => {
+    const { agent, job } = await technicianWithJob();
+    const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'p.png');
+    const url = `/api/files/${upload.body.file.id}`;
+
+    const own = await agent.get(url).buffer(true).parse((res, cb) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (c: Buffer) => chunks.push(c));
+      res.on('end', () => cb(null, Buffer.concat(chunks)));
+    });
+    expect(own.status).toBe(200);
+    expect(own.headers['content-type']).toBe('image/png');
+    expect(sha256(own.body as Buffer)).toBe(sha256(PNG_1X1));
+
+    const { agent: reviewer } = await signedInAgent(app, 'reviewer');
+    expect((await reviewer.get(url)).status).toBe(200);
+    const { agent: otherTechnician } = await signedInAgent(app, 'technician');
+    expect((await otherTechnician.get(url)).status).toBe(404);
+    expect((await clientAgent(app).get(url)).status).toBe(401);
+  });
+});
+
+describe('DELETE /api/jobs/:id/files/:fileId', () => {
+  it('removes the file from the working record but keeps its row for earlier revisions', async () => {
+    const { agent, job } = await technicianWithJob();
+    const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'p.png');
+    expect((await agent.delete(`/api/jobs/${job.id}/files/${upload.body.file.id}`)).status).toBe(204);
+    expect((await agent.get(`/api/jobs/${job.id}`)).body.files).toEqual([]);
+    expect((await StoredFile.findByPk(upload.body.file.id))!.detachedAt).not.toBeNull();
+  });
+});
