@@ -20,7 +20,7 @@ module.exports = {
       displayName: 'components',
       preset: 'jest-expo/web',
       moduleNameMapper,
-      testMatch: ['<rootDir>/tests/components/**/*.test.tsx'],
+      testMatch: ['<rootDir>/tests/components/**/*.test.{ts,tsx}'],
       setupFilesAfterEnv: ['<rootDir>/tests/helpers/components-setup.ts'],
       transformIgnorePatterns: [
         'node_modules/(?!((jest-)?react-native|@react-native(-community)?|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|react-native-svg|@tanstack/.*|standard-navigation))',

@@ -41,7 +41,39 @@ async function request<T>(method: Method, path: string, body?: unknown): Promise
   return payload as T;
 }
 
+// Uploads go through XMLHttpRequest because fetch cannot report upload progress.
+function upload<T>(path: string, form: FormData, onProgress: (fraction: number) => void): Promise<T> {
+  return new Promise((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', path);
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('X-Sightline-Request', '1');
+    xhr.setRequestHeader('Accept', 'application/json');
+    xhr.upload.onprogress = (event) => {
+      if (event.lengthComputable) onProgress(event.loaded / event.total);
+    };
+    xhr.onerror = () => reject(new ApiError(0, 'offline', 'The upload did not reach Sightline. Check your connection and retry.'));
+    xhr.onload = () => {
+      let payload: unknown = null;
+      try {
+        payload = JSON.parse(xhr.responseText);
+      } catch {
+        payload = null;
+      }
+      if (xhr.status >= 200 && xhr.status < 300) {
+        onProgress(1);
+        resolve(payload as T);
+        return;
+      }
+      const error = (payload as ApiErrorBody | null)?.error;
+      reject(new ApiError(xhr.status, error?.code ?? 'http_error', error?.message ?? `Upload failed (${xhr.status}).`, error?.fields));
+    };
+    xhr.send(form);
+  });
+}
+
 export const api = {
+  upload,
   get: <T>(path: string) => request<T>('GET', path),
   post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),

@@ -23,13 +23,16 @@ export function Button({ label, onPress, tone = 'primary', busy, disabled, acces
       disabled={inactive}
       onPress={onPress}
       testID={testID}
-      style={({ pressed, focused }: { pressed: boolean; focused?: boolean }) => [
+      style={(state) => {
+        const { pressed, focused } = state as { pressed: boolean; focused?: boolean };
+        return [
         styles.base,
         styles[tone],
         pressed && styles.pressed,
         inactive && styles.inactive,
         focused && styles.focused,
-      ]}
+      ];
+      }}
     >
       {busy ? <ActivityIndicator color={tone === 'secondary' ? colors.ink : colors.surface} /> : null}
       <Text style={[styles.label, tone === 'secondary' ? { color: colors.ink } : { color: colors.surface }]}>{label}</Text>

@@ -8,6 +8,7 @@ import {
   tableFeatures,
   useTable,
   type ColumnDef,
+  type RowData,
   type SortingState,
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
@@ -21,9 +22,9 @@ export const dataTableFeatures = tableFeatures({
   sortFns,
 });
 
-export type DataTableColumn<T> = ColumnDef<typeof dataTableFeatures, T> & { meta?: { width?: number } };
+export type DataTableColumn<T extends RowData> = ColumnDef<typeof dataTableFeatures, T> & { meta?: { width?: number } };
 
-type Props<T> = {
+type Props<T extends RowData> = {
   label: string;
   columns: DataTableColumn<T>[];
   data: T[];
@@ -35,7 +36,7 @@ type Props<T> = {
 
 const SORT_WORD = { asc: 'ascending', desc: 'descending' } as const;
 
-export function DataTable<T>({ label, columns, data, emptyText, initialSorting = [], getRowId, onRowPress }: Props<T>) {
+export function DataTable<T extends RowData>({ label, columns, data, emptyText, initialSorting = [], getRowId, onRowPress }: Props<T>) {
   const [sorting, setSorting] = useState<SortingState>(initialSorting);
   const withTextCells = useMemo(
     () => columns.map((column) => (column.cell ? column : { ...column, cell: (info: { getValue: () => unknown }) => plainCell(info.getValue()) })),
@@ -97,7 +98,7 @@ export function DataTable<T>({ label, columns, data, emptyText, initialSorting =
               </View>
             ));
             return onRowPress ? (
-              <Pressable role="row" key={row.id} onPress={() => onRowPress(row.original)} style={({ focused }: { focused?: boolean }) => [styles.row, focused && styles.focused]}>
+              <Pressable role="row" key={row.id} onPress={() => onRowPress(row.original)} style={(state) => [styles.row, (state as { focused?: boolean }).focused && styles.focused]}>
                 {cells}
               </Pressable>
             ) : (

@@ -121,7 +121,11 @@ export function demoJobs(now = new Date()): DemoJob[] {
   const jobs: DemoJob[] = [];
   for (let i = 0; i < 60; i++) {
     const weeksAgo = Math.floor((59 - i) / 5);
-    const siteVisit = new Date(now.getTime() - weeksAgo * 7 * DAY - Math.floor(rand() * 5) * DAY - 12 * 3_600_000);
+    const recent = i - (60 - RECENT_STATES.length);
+    // Open jobs were visited in the last few days, so some are still in time and some are late.
+    const siteVisit = recent >= 0
+      ? new Date(now.getTime() - (recent % 6) * DAY - 12 * 3_600_000)
+      : new Date(now.getTime() - weeksAgo * 7 * DAY - Math.floor(rand() * 5) * DAY - 12 * 3_600_000);
     const loss = new Date(siteVisit.getTime() - (1 + Math.floor(rand() * 4)) * DAY);
     const status = statusFor(i, rand());
     const revisionsWanted =
@@ -140,7 +144,7 @@ export function demoJobs(now = new Date()): DemoJob[] {
       lossType: LOSS_TYPES[Math.floor(rand() * LOSS_TYPES.length)],
       lossDate: isoDate(loss),
       siteVisitDate: status === 'draft' && rand() < 0.4 ? null : isoDate(siteVisit),
-      dueAt: new Date(siteVisit.getTime() + 3 * DAY),
+      dueAt: new Date(siteVisit.getTime() + 4 * DAY),
       priority: priorityRoll < 0.75 ? 'normal' : priorityRoll < 0.93 ? 'urgent' : 'catastrophe',
       status,
       technicianIndex: i % 6,

@@ -1,0 +1,108 @@
+// The short sections of the capture record form.
+import { Controller, useWatch } from 'react-hook-form';
+import { View } from 'react-native';
+import { CAMERA_CLASS_LABELS, CAMERA_CLASSES, GLAZING_FLAGGED, HAZARD_LABELS, HAZARDS, type Hazard } from '@/shared/capture-record';
+import { Checkbox } from '@/components/ui/checkbox';
+import { ChoiceField } from '@/components/ui/choice-field';
+import { Notice } from '@/components/ui/notice';
+import { Section } from '@/components/ui/section';
+import { Text } from '@/components/ui/text';
+import { space } from '@/components/ui/theme';
+import type { LengthUnit } from '@/shared/units';
+import { formatDateTime } from '@/components/lib/format';
+import { ChoiceInputField, options, TextInputField } from './controlled';
+import { useRecordForm } from './form-context';
+
+export function CameraSection({ onUnitsChange }: { onUnitsChange: (unit: LengthUnit) => void }) {
+  const { control } = useRecordForm();
+  const units = useWatch({ control, name: 'units' });
+  const cameraClass = useWatch({ control, name: 'cameraClass' });
+  return (
+    <Section title="Camera and units" summary={cameraClass ? CAMERA_CLASS_LABELS[cameraClass] : 'Camera class not chosen'}>
+      <ChoiceInputField name="cameraClass" label="Camera class" options={options(CAMERA_CLASSES, CAMERA_CLASS_LABELS)} />
+      <ChoiceField<LengthUnit> label="Units for sizes" options={[{ value: 'ft', label: 'Feet' }, { value: 'm', label: 'Metres' }]} value={units} onChange={onUnitsChange} />
+      <ChoiceInputField name="glazingFlagged" label="Windows and glass doors (glazing) flagged" options={options(GLAZING_FLAGGED, { yes: 'Yes', no: 'No', partly: 'Partly' })} />
+    </Section>
+  );
+}
+
+export function PanoramasSection() {
+  const { control } = useRecordForm();
+  const rooms = useWatch({ control, name: 'rooms' });
+  return (
+    <Section title="Supplementary panoramas" summary="Extra 360 photos not registered to stations, e.g. open cabinets" initiallyOpen={false}>
+      <Text variant="muted">Common practice: open cabinets are captured with the camera at about mid-cabinet height.</Text>
+      <TextInputField name="panoramas.count" label="How many" numeric="numeric" />
+      <Text variant="label">Rooms with panoramas</Text>
+      <Controller
+        control={control}
+        name="panoramas.roomKeys"
+        render={({ field }) => (
+          <View>
+            {rooms.map((room, i) => (
+              <Checkbox key={room.key} label={room.name.trim() || `Room ${i + 1}`} checked={field.value.includes(room.key)}
+                onChange={(on) => field.onChange(on ? [...field.value, room.key] : field.value.filter((k: string) => k !== room.key))} />
+            ))}
+          </View>
+        )}
+      />
+    </Section>
+  );
+}
+
+export function ProcessingSection() {
+  const { control, errors } = useRecordForm();
+  return (
+    <Section title="Processing" summary="Required before submitting">
+      <Controller
+        control={control}
+        name="processing"
+        render={({ field }) => (
+          <View style={{ gap: space.xs }}>
+            <Checkbox
+              label="I checked that the uploaded capture started processing on the capture platform"
+              checked={field.value.confirmed}
+              onChange={(confirmed) => field.onChange({ confirmed, confirmedAt: confirmed ? new Date().toISOString() : null })}
+            />
+            {field.value.confirmedAt ? <Text variant="muted">{`Confirmed ${formatDateTime(field.value.confirmedAt)}`}</Text> : null}
+            {errors['processing.confirmed'] ? <Text role="alert" style={{ color: '#B42318' }}>{errors['processing.confirmed']}</Text> : null}
+          </View>
+        )}
+      />
+    </Section>
+  );
+}
+
+export function SafetySection() {
+  const { control } = useRecordForm();
+  return (
+    <Section title="Site safety" summary="Hazards met on site" initiallyOpen={false}>
+      <Notice tone="caution">
+        Attics, crawl spaces, standing water, live wiring, roofs and ladders can hurt you. Follow your firm's safety policy and local
+        codes; do not enter an unsafe space or touch wiring or structure that a licensed professional should assess. Record a gap
+        instead of taking a risk.
+      </Notice>
+      <Controller
+        control={control}
+        name="safety.hazards"
+        render={({ field }) => (
+          <View>
+            {HAZARDS.map((hazard: Hazard) => (
+              <Checkbox key={hazard} label={HAZARD_LABELS[hazard]} checked={field.value.includes(hazard)}
+                onChange={(on) => field.onChange(on ? [...field.value, hazard] : field.value.filter((h: Hazard) => h !== hazard))} />
+            ))}
+          </View>
+        )}
+      />
+      <TextInputField name="safety.note" label="Safety note (optional)" multiline />
+    </Section>
+  );
+}
+
+export function NotesSection() {
+  return (
+    <Section title="Notes" summary="Anything the reviewer should know" initiallyOpen={false}>
+      <TextInputField name="notes" label="Notes for the reviewer" multiline />
+    </Section>
+  );
+}
