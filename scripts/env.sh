@@ -15,3 +15,4 @@ export S3_BUCKET="${S3_BUCKET:-sightline-files}"
 export APP_URL="${APP_URL:-http://$HOST:$PORT}"
 export EXPO_OFFLINE=1 EXPO_NO_TELEMETRY=1
 export DATA_DIR="${DATA_DIR:-$PWD/.data}"
+export AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED=true  # the S3 client warns about Node 20 on every start
