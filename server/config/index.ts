@@ -51,6 +51,11 @@ export const config = {
     accessKeyId: env.S3_ACCESS_KEY_ID ?? 'S3RVER',
     secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? 'S3RVER',
   },
+  review: {
+    claimMinutes: number('CLAIM_MINUTES', 30),
+    // Share of accepted first reviews drawn for a blind second review (calibration).
+    secondReviewShare: number('SECOND_REVIEW_SHARE', 0.1),
+  },
   uploadMaxBytes: number('UPLOAD_MAX_MB', 25) * 1024 * 1024,
   instanceId: env.INSTANCE_ID ?? crypto.randomUUID(),
 };

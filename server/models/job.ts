@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import { JOB_STATUSES, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES, type JobStatus, type LossType, type Priority, type PropertyType } from '../../shared/jobs';
+import { CAMERA_CLASSES, type CameraClass } from '../../shared/capture-record';
 import type { User } from './user';
 
 export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
@@ -15,6 +16,16 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
   declare dueAt: Date;
   declare priority: CreationOptional<Priority>;
   declare status: CreationOptional<JobStatus>;
+  declare currentRevision: CreationOptional<number>;
+  declare cameraClass: CameraClass | null;
+  declare submittedAt: Date | null;
+  // Due time shifted by every pause while the job waited on the technician.
+  declare effectiveDueAt: Date;
+  declare pausedAt: Date | null;
+  declare pausedMs: CreationOptional<number>;
+  declare claimedById: number | null;
+  declare claimedAt: Date | null;
+  declare claimExpiresAt: Date | null;
   declare technicianId: ForeignKey<User['id']>;
   declare createdById: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
@@ -36,6 +47,15 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
         dueAt: { type: DataTypes.DATE(3), allowNull: false },
         priority: { type: DataTypes.ENUM(...PRIORITIES), allowNull: false, defaultValue: 'normal' },
         status: { type: DataTypes.ENUM(...JOB_STATUSES), allowNull: false, defaultValue: 'draft' },
+        currentRevision: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
+        cameraClass: { type: DataTypes.ENUM(...CAMERA_CLASSES), allowNull: true },
+        submittedAt: { type: DataTypes.DATE(3), allowNull: true },
+        effectiveDueAt: { type: DataTypes.DATE(3), allowNull: false },
+        pausedAt: { type: DataTypes.DATE(3), allowNull: true },
+        pausedMs: { type: DataTypes.BIGINT.UNSIGNED, allowNull: false, defaultValue: 0, get() { return Number(this.getDataValue('pausedMs')); } },
+        claimedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
+        claimedAt: { type: DataTypes.DATE(3), allowNull: true },
+        claimExpiresAt: { type: DataTypes.DATE(3), allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

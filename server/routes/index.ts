@@ -3,6 +3,9 @@ import { filesRouter } from './files';
 import { healthRouter } from './health';
 import { jobsRouter } from './jobs';
 import { meRouter } from './me';
+import { queueRouter } from './queue';
+import { reviewsRouter } from './reviews';
+import { rubricsRouter } from './rubrics';
 import { sessionRouter } from './session';
 import { techniciansRouter } from './technicians';
 import { usersRouter } from './users';
@@ -17,4 +20,7 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api/technicians', router: techniciansRouter },
   { prefix: '/api/jobs', router: jobsRouter },
   { prefix: '/api/files', router: filesRouter },
+  { prefix: '/api/queue', router: queueRouter },
+  { prefix: '/api/rubrics', router: rubricsRouter },
+  { prefix: '/api', router: reviewsRouter },
 ];

@@ -4,6 +4,8 @@ import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
 import { checkCaptureRecord } from '../../shared/pre-submit-checks';
 import { conflict, invalid, notFound } from '../errors';
 import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models';
+import { recordEvent } from './audit-service';
+import { resumeDueClock } from './due-clock';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 
 type Actor = Express.User;
@@ -67,7 +69,12 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     );
     await CaptureDraft.upsert({ jobId, data: record }, { transaction });
     job.status = number === 1 ? 'submitted' : 'resubmitted';
+    job.currentRevision = number;
+    job.cameraClass = record.cameraClass;
+    job.submittedAt = submittedAt;
+    resumeDueClock(job, submittedAt);
     await job.save({ transaction });
+    await recordEvent(transaction, jobId, actor.id, 'submitted', { revision: number, warnings: findings.warnings.length });
     return { revision: number, status: job.status, submittedAt: submittedAt.toISOString(), warnings: findings.warnings };
   });
 }

@@ -3,6 +3,7 @@ import type { JobStatus, JobSummary, LossType, Priority, PropertyType } from '..
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, sequelize, StoredFile, User } from '../models';
+import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
 
 type Actor = Express.User;
@@ -80,7 +81,10 @@ export async function createJob(actor: Actor, input: JobInput): Promise<JobSumma
     throw new HttpError(409, 'conflict', 'A job with that claim reference already exists.', { claimReference: 'Already in use' });
   }
   const job = await sequelize.transaction(async (transaction) => {
-    const created = await Job.create({ ...input, dueAt: new Date(input.dueAt), createdById: actor.id }, { transaction });
+    const dueAt = new Date(input.dueAt);
+    const created = await Job.create({ ...input, dueAt, effectiveDueAt: dueAt, createdById: actor.id, cameraClass: null, submittedAt: null, pausedAt: null, claimedById: null, claimedAt: null, claimExpiresAt: null }, { transaction });
+    await recordEvent(transaction, created.id, actor.id, 'created', { claimReference: created.claimReference });
+    await recordEvent(transaction, created.id, actor.id, 'assigned', { technicianId: input.technicianId });
     await CaptureDraft.create({ jobId: created.id, data: emptyCaptureRecord() }, { transaction });
     return created;
   });
@@ -89,10 +93,21 @@ export async function createJob(actor: Actor, input: JobInput): Promise<JobSumma
 
 export async function updateJob(actor: Actor, jobId: number, changes: Partial<Pick<JobInput, 'technicianId' | 'dueAt' | 'priority' | 'siteVisitDate'>>) {
   if (changes.technicianId !== undefined) await assertActiveTechnician(changes.technicianId);
-  const job = await findJobFor(actor, jobId);
-  const { dueAt, ...rest } = changes;
-  await job.update({ ...rest, ...(dueAt !== undefined && { dueAt: new Date(dueAt) }) });
-  return getJobSummary(actor, job.id);
+  await sequelize.transaction(async (transaction) => {
+    const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
+    const { dueAt, ...rest } = changes;
+    const previousTechnician = job.technicianId;
+    job.set(rest);
+    if (dueAt !== undefined) {
+      job.dueAt = new Date(dueAt);
+      job.effectiveDueAt = new Date(job.dueAt.getTime() + job.pausedMs);
+    }
+    await job.save({ transaction });
+    if (changes.technicianId !== undefined && changes.technicianId !== previousTechnician) {
+      await recordEvent(transaction, job.id, actor.id, 'reassigned', { from: previousTechnician, to: changes.technicianId });
+    }
+  });
+  return getJobSummary(actor, jobId);
 }
 
 export async function getJobSummary(actor: Actor, jobId: number): Promise<JobSummary> {

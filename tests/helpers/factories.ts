@@ -1,6 +1,9 @@
 import crypto from 'node:crypto';
 import type { Role } from '../../shared/roles';
-import { CaptureDraft, Job, User } from '../../server/models';
+import { CaptureDraft, CaptureRevision, Job, Review, Rubric, SecondReview, User } from '../../server/models';
+import { criterionApplies, scaleMax } from '../../shared/rubric';
+import type { CaptureRecord } from '../../shared/capture-record';
+import { completeRecord } from './records';
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import type { JobStatus } from '../../shared/jobs';
 import { hashPassword } from '../../server/services/users-service';
@@ -39,6 +42,14 @@ export async function createJob(overrides: Partial<{ technicianId: number; statu
     lossDate: '2026-11-01',
     siteVisitDate: '2026-11-03',
     dueAt: overrides.dueAt ?? new Date(Date.now() + 3 * 86_400_000),
+    effectiveDueAt: overrides.dueAt ?? new Date(Date.now() + 3 * 86_400_000),
+    currentRevision: 0,
+    cameraClass: null,
+    submittedAt: null,
+    pausedAt: null,
+    claimedById: null,
+    claimedAt: null,
+    claimExpiresAt: null,
     priority: 'normal',
     status: overrides.status ?? 'draft',
     technicianId,
@@ -56,4 +67,46 @@ export function newJobBody(technicianId: number) {
     propertyType: 'townhouse', lossType: 'water', lossDate: '2026-11-20', siteVisitDate: '2026-11-22',
     dueAt: new Date(Date.now() + 5 * 86_400_000).toISOString(), priority: 'normal', technicianId,
   };
+}
+
+// A job whose record was submitted as revision `revision` (default 1), waiting for review.
+export async function createSubmittedJob(overrides: Partial<{ technicianId: number; record: CaptureRecord; dueAt: Date; revision: number; priority: 'normal' | 'urgent' | 'catastrophe' }> = {}) {
+  const job = await createJob({ technicianId: overrides.technicianId, dueAt: overrides.dueAt });
+  const record = overrides.record ?? completeRecord();
+  const revision = overrides.revision ?? 1;
+  const submittedAt = new Date();
+  for (let n = 1; n <= revision; n++) {
+    await CaptureRevision.create({ jobId: job.id, number: n, data: record, files: [], findings: { missing: [], warnings: [] }, submittedById: job.technicianId, submittedAt });
+  }
+  await job.update({ status: revision > 1 ? 'resubmitted' : 'submitted', currentRevision: revision, cameraClass: record.cameraClass, submittedAt, priority: overrides.priority ?? 'normal' });
+  return job;
+}
+
+export async function claimFor(job: Job, reviewerId: number, minutesLeft = 30) {
+  await job.update({ claimedById: reviewerId, claimedAt: new Date(), claimExpiresAt: new Date(Date.now() + minutesLeft * 60_000), status: 'in_review' });
+  return job;
+}
+
+// Full marks on every applicable criterion of the current rubric.
+export async function fullScores(record: CaptureRecord = completeRecord()) {
+  const rubric = await Rubric.findOne({ order: [['version', 'DESC']] });
+  return rubric!.criteria.map((c) => ({
+    key: c.key,
+    score: criterionApplies(c, record) ? scaleMax(c.scale) : null,
+    stockReason: null,
+    comment: '',
+  }));
+}
+
+// An accepted review by a fresh reviewer, drawn for a blind second review.
+export async function secondReviewByAnother() {
+  const first = await createUser({ role: 'reviewer' });
+  const job = await createSubmittedJob();
+  const rubric = await Rubric.findOne({ order: [['version', 'DESC']] });
+  const review = await Review.create({
+    jobId: job.id, revisionNumber: 1, reviewerId: first.id, rubricId: rubric!.id, kind: 'primary', score: 100, passed: true,
+    decision: 'accept', claimedAt: null, decidedAt: new Date(), dueAt: job.effectiveDueAt,
+  });
+  await job.update({ status: 'accepted' });
+  return SecondReview.create({ jobId: job.id, revisionNumber: 1, firstReviewId: review.id, firstReviewerId: first.id, secondReviewId: null, claimedById: null, claimExpiresAt: null });
 }

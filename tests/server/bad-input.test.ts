@@ -3,7 +3,7 @@
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/models';
 import type { Role } from '../../shared/roles';
-import { createJob, createUser } from '../helpers/factories';
+import { claimFor, createJob, createSubmittedJob, createUser, secondReviewByAnother } from '../helpers/factories';
 import { completeRecord } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
 import { countRows, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
@@ -20,7 +20,7 @@ type BadInputCase = {
 };
 
 // Routes that take no input at all.
-const NO_INPUT = ['DELETE /api/session'];
+const NO_INPUT = ['DELETE /api/session', 'DELETE /api/jobs/:id/claim'];
 
 const CASES: Record<string, BadInputCase> = {
   'POST /api/session': { as: 'anonymous', tables: ['sessions'], body: { email: 'no', password: '' }, fields: ['email', 'password'] },
@@ -73,6 +73,30 @@ const CASES: Record<string, BadInputCase> = {
     prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/files/first` }),
     body: {},
     fields: ['fileId'],
+  },
+  'POST /api/jobs/:id/claim': {
+    as: 'reviewer', tables: ['audit_events'],
+    prepare: async () => ({ path: '/api/jobs/not-a-job/claim' }), body: {}, fields: ['id'],
+  },
+  'POST /api/claims/reassign': {
+    as: 'manager', tables: ['audit_events'],
+    body: { toReviewerId: 'ravi', jobIds: ['x'] }, fields: ['jobIds.0', 'toReviewerId'],
+  },
+  'POST /api/jobs/:id/reviews': {
+    as: 'reviewer', tables: ['reviews', 'review_scores'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await claimFor(await createSubmittedJob(), me.id)).id}/reviews` }),
+    body: { decision: 'shrug', scores: [{ key: 'coverage', score: 9, comment: 5 }] },
+    fields: ['decision', 'scores.0.comment', 'scores.0.score'],
+  },
+  'POST /api/second-reviews/:id/reviews': {
+    as: 'reviewer', tables: ['reviews'],
+    prepare: async () => ({ path: `/api/second-reviews/${(await secondReviewByAnother()).id}/reviews` }),
+    body: { decision: 'accept', scores: 'all good' }, fields: ['scores'],
+  },
+  'POST /api/rubrics': {
+    as: 'manager', tables: ['rubrics'],
+    body: { passMark: 120, criteria: [{ key: 'Bad Key', title: 'x', guidance: '', weight: 0, critical: 'no', appliesWhen: 'sometimes', scale: { kind: 'stars' }, stockReasons: [] }] },
+    fields: ['criteria', 'criteria.0.appliesWhen', 'criteria.0.critical', 'criteria.0.key', 'criteria.0.scale.kind', 'criteria.0.title', 'criteria.0.weight', 'passMark'],
   },
 };
 

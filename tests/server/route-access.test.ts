@@ -7,7 +7,8 @@ import { sequelize } from '../../server/models';
 import { ROLES, type Role } from '../../shared/roles';
 import { createUser, TEST_PASSWORD } from '../helpers/factories';
 import { clientAgent, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
-import { createJob, newJobBody } from '../helpers/factories';
+import { claimFor, createJob, createSubmittedJob, fullScores, newJobBody, secondReviewByAnother } from '../helpers/factories';
+import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { completeRecord } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
 import { CaptureRevision, StoredFile } from '../../server/models';
@@ -103,6 +104,44 @@ const ROUTES: Record<string, RouteCase> = {
       return { path: `/api/files/${file.id}` };
     },
   },
+  'GET /api/queue': { allowed: ['reviewer', 'manager'] },
+  'POST /api/jobs/:id/claim': { allowed: ['reviewer'], prepare: async () => ({ path: `/api/jobs/${(await createSubmittedJob()).id}/claim` }) },
+  'DELETE /api/jobs/:id/claim': {
+    allowed: ['reviewer', 'manager'],
+    prepare: async (me) => {
+      const reviewerId = me?.role === 'reviewer' ? me.id : (await createUser({ role: 'reviewer' })).id;
+      return { path: `/api/jobs/${(await claimFor(await createSubmittedJob(), reviewerId)).id}/claim` };
+    },
+  },
+  'POST /api/claims/reassign': {
+    allowed: ['manager'],
+    prepare: async () => {
+      const [from, to] = [await createUser({ role: 'reviewer' }), await createUser({ role: 'reviewer' })];
+      const job = await claimFor(await createSubmittedJob(), from.id);
+      return { body: { toReviewerId: to.id, jobIds: [job.id] } };
+    },
+  },
+  'GET /api/jobs/:id/workspace': { allowed: ['reviewer', 'manager'], prepare: async () => ({ path: `/api/jobs/${(await createSubmittedJob()).id}/workspace` }) },
+  'POST /api/jobs/:id/reviews': {
+    allowed: ['reviewer'],
+    prepare: async (me) => {
+      const job = await createSubmittedJob();
+      if (me) await claimFor(job, me.id);
+      return { path: `/api/jobs/${job.id}/reviews`, body: { decision: 'accept', scores: await fullScores() } };
+    },
+  },
+  'GET /api/second-reviews': { allowed: ['reviewer'] },
+  'POST /api/second-reviews/:id/reviews': {
+    allowed: ['reviewer'],
+    prepare: async () => {
+      const second = await secondReviewByAnother();
+      return { path: `/api/second-reviews/${second.id}/reviews`, body: { decision: 'accept', scores: await fullScores() } };
+    },
+  },
+  'GET /api/reviewers': { allowed: ['manager'] },
+  'GET /api/rubrics': { allowed: ['reviewer', 'manager'] },
+  'GET /api/rubrics/current': { allowed: ['reviewer', 'manager'] },
+  'POST /api/rubrics': { allowed: ['manager'], prepare: async () => ({ body: DEFAULT_RUBRIC }) },
 };
 
 // A job the signed-in technician owns (anyone else's job for the other roles).

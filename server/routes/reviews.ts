@@ -1,0 +1,58 @@
+import { Router } from 'express';
+import { param, query } from 'express-validator';
+import { requireRole } from '../middleware/require-auth';
+import { validate } from '../middleware/validate';
+import { claimJob, reassignClaims, releaseClaim } from '../services/claims-service';
+import { getWorkspace, listOpenSecondReviews, submitReview, submitSecondReview } from '../services/review-service';
+import { reassignRules, reviewRules } from '../validators/review';
+import { User } from '../models';
+
+// Mounted at /api: claims, the scoring workspace, decisions and blind second reviews.
+export const reviewsRouter = Router();
+
+const jobId = param('id', 'Must be a job id').isInt({ min: 1 }).toInt();
+
+reviewsRouter.post('/jobs/:id/claim', requireRole('reviewer'), validate(jobId), async (req, res) => {
+  res.json(await claimJob(req.user!, Number(req.params.id)));
+});
+
+reviewsRouter.delete('/jobs/:id/claim', requireRole('reviewer', 'manager'), validate(jobId), async (req, res) => {
+  await releaseClaim(req.user!, Number(req.params.id));
+  res.status(204).end();
+});
+
+reviewsRouter.post('/claims/reassign', requireRole('manager'), validate(...reassignRules), async (req, res) => {
+  res.json(await reassignClaims(req.user!, req.body));
+});
+
+reviewsRouter.get(
+  '/jobs/:id/workspace',
+  requireRole('reviewer', 'manager'),
+  validate(jobId, query('second', 'Must be a second-review id').optional().isInt({ min: 1 }).toInt()),
+  async (req, res) => {
+    res.json(await getWorkspace(req.user!, Number(req.params.id), req.query.second ? Number(req.query.second) : null));
+  },
+);
+
+// The server recomputes the score from the criterion scores; any total the client sends is ignored.
+reviewsRouter.post('/jobs/:id/reviews', requireRole('reviewer'), validate(jobId, ...reviewRules), async (req, res) => {
+  res.status(201).json(await submitReview(req.user!, Number(req.params.id), { decision: req.body.decision, scores: req.body.scores }));
+});
+
+reviewsRouter.get('/second-reviews', requireRole('reviewer'), async (req, res) => {
+  res.json({ secondReviews: await listOpenSecondReviews(req.user!) });
+});
+
+reviewsRouter.post(
+  '/second-reviews/:id/reviews',
+  requireRole('reviewer'),
+  validate(param('id', 'Must be a second-review id').isInt({ min: 1 }).toInt(), ...reviewRules),
+  async (req, res) => {
+    res.status(201).json(await submitSecondReview(req.user!, Number(req.params.id), { decision: req.body.decision, scores: req.body.scores }));
+  },
+);
+
+reviewsRouter.get('/reviewers', requireRole('manager'), async (_req, res) => {
+  const reviewers = await User.findAll({ where: { role: 'reviewer', active: true }, attributes: ['id', 'name'], order: [['name', 'ASC']] });
+  res.json({ reviewers: reviewers.map((r) => ({ id: r.id, name: r.name })) });
+});

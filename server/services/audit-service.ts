@@ -1,0 +1,8 @@
+import type { Transaction } from 'sequelize';
+import { AuditEvent } from '../models';
+
+// Appends to a job's timeline inside the caller's transaction, so the event exists exactly
+// when the change it describes does.
+export async function recordEvent(transaction: Transaction, jobId: number, actorId: number | null, type: string, data: object = {}) {
+  await AuditEvent.create({ jobId, actorId, type, data, createdAt: new Date() }, { transaction });
+}

@@ -1,0 +1,85 @@
+import { Op } from 'sequelize';
+import { config } from '../config';
+import { conflict, HttpError, invalid, notFound } from '../errors';
+import { Job, sequelize, User } from '../models';
+import { recordEvent } from './audit-service';
+import { activeClaim } from './queue-service';
+
+type Actor = Express.User;
+
+const CLAIMABLE: Job['status'][] = ['submitted', 'resubmitted', 'in_review'];
+const claimLength = () => config.review.claimMinutes * 60_000;
+
+// One conditional UPDATE decides the race: it only matches while nobody else holds a live
+// claim, so of any number of simultaneous claims exactly one changes the row.
+export async function claimJob(actor: Actor, jobId: number) {
+  return sequelize.transaction(async (transaction) => {
+    const now = new Date();
+    const [changed] = await Job.update(
+      { claimedById: actor.id, claimedAt: now, claimExpiresAt: new Date(now.getTime() + claimLength()), status: 'in_review' },
+      {
+        where: {
+          id: jobId,
+          status: { [Op.in]: CLAIMABLE },
+          [Op.or]: [{ claimedById: null }, { claimExpiresAt: { [Op.lt]: now } }, { claimedById: actor.id }],
+        },
+        transaction,
+      },
+    );
+    const job = await Job.findByPk(jobId, { include: [{ model: User, as: 'claimedBy', attributes: ['id', 'name'] }], transaction });
+    if (!job) throw notFound('Job');
+    if (changed === 0) {
+      if (!CLAIMABLE.includes(job.status)) throw conflict('This job is not waiting for review.');
+      const holder = job.get('claimedBy') as User | null;
+      throw new HttpError(409, 'already_claimed', `${holder?.name ?? 'Another reviewer'} has claimed this job.`);
+    }
+    await recordEvent(transaction, jobId, actor.id, 'claimed', { until: job.claimExpiresAt!.toISOString() });
+    return { jobId, claimedBy: { id: actor.id, name: actor.name }, claimExpiresAt: job.claimExpiresAt!.toISOString() };
+  });
+}
+
+export async function releaseClaim(actor: Actor, jobId: number) {
+  return sequelize.transaction(async (transaction) => {
+    const job = await Job.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!job) throw notFound('Job');
+    if (!activeClaim(job) || (job.claimedById !== actor.id && actor.role !== 'manager')) {
+      throw conflict('You do not hold a claim on this job.');
+    }
+    await releaseRow(job, transaction);
+    await recordEvent(transaction, jobId, actor.id, 'released', {});
+  });
+}
+
+async function releaseRow(job: Job, transaction: import('sequelize').Transaction) {
+  job.claimedById = null;
+  job.claimedAt = null;
+  job.claimExpiresAt = null;
+  if (job.status === 'in_review') job.status = job.currentRevision > 1 ? 'resubmitted' : 'submitted';
+  await job.save({ transaction });
+}
+
+// Managers move claims to another reviewer: named jobs, or every live claim of one reviewer.
+export async function reassignClaims(actor: Actor, input: { toReviewerId: number; jobIds?: number[]; fromReviewerId?: number }) {
+  const target = await User.findByPk(input.toReviewerId);
+  if (!target || target.role !== 'reviewer' || !target.active) throw invalid({ toReviewerId: 'Choose an active reviewer' });
+  return sequelize.transaction(async (transaction) => {
+    const now = new Date();
+    const where = input.jobIds?.length
+      ? { id: { [Op.in]: input.jobIds } }
+      : { claimedById: input.fromReviewerId!, claimExpiresAt: { [Op.gt]: now } };
+    const jobs = await Job.findAll({ where, transaction, lock: transaction.LOCK.UPDATE });
+    for (const job of jobs) {
+      if (!CLAIMABLE.includes(job.status)) continue;
+      const from = job.claimedById;
+      await job.update({ claimedById: target.id, claimedAt: now, claimExpiresAt: new Date(now.getTime() + claimLength()), status: 'in_review' }, { transaction });
+      await recordEvent(transaction, job.id, actor.id, 'claim_reassigned', { from, to: target.id });
+    }
+    return { moved: jobs.filter((j) => j.claimedById === target.id).length };
+  });
+}
+
+export function assertHoldsClaim(actor: Actor, job: Job) {
+  if (!activeClaim(job) || job.claimedById !== actor.id) {
+    throw conflict('Claim this job before scoring it (your claim may have expired).');
+  }
+}

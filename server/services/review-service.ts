@@ -1,0 +1,206 @@
+import { Op } from 'sequelize';
+import type { CaptureRecord } from '../../shared/capture-record';
+import type { Decision, ScoreInput, Workspace } from '../../shared/review';
+import { criterionApplies, scaleMax, type Criterion } from '../../shared/rubric';
+import { evaluate, isBelowFullMarks, type ScoreSheet } from '../../shared/scoring';
+import { config } from '../config';
+import { conflict, forbidden, invalid, notFound } from '../errors';
+import { CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, sequelize, User } from '../models';
+import { recordEvent } from './audit-service';
+import { assertHoldsClaim } from './claims-service';
+import { pauseDueClock } from './due-clock';
+import { toQueueRow } from './queue-service';
+import { currentRubric, toRubricView } from './rubric-service';
+
+type Actor = Express.User;
+
+export function applicability(criteria: Criterion[], record: CaptureRecord) {
+  return Object.fromEntries(criteria.map((c) => [c.key, criterionApplies(c, record)]));
+}
+
+// Checks a score sheet against the rubric and the record; field names follow the form.
+export function validateScores(criteria: Criterion[], record: CaptureRecord, scores: ScoreInput[]) {
+  const fields: Record<string, string> = {};
+  const byKey = new Map(scores.map((s) => [s.key, s]));
+  const applies = applicability(criteria, record);
+  for (const extra of scores.filter((s) => !criteria.some((c) => c.key === s.key))) fields[`scores.${extra.key}`] = 'Not a criterion of this rubric';
+  for (const criterion of criteria) {
+    const field = `scores.${criterion.key}`;
+    const input = byKey.get(criterion.key);
+    if (!applies[criterion.key]) {
+      if (input && input.score !== null) fields[field] = 'This criterion does not apply to this record';
+      continue;
+    }
+    if (!input || input.score === null) {
+      fields[field] = 'Score this criterion';
+      continue;
+    }
+    const max = scaleMax(criterion.scale);
+    if (!Number.isInteger(input.score) || input.score < 0 || input.score > max) {
+      fields[field] = `Score from 0 to ${max}`;
+      continue;
+    }
+    if (input.stockReason && !criterion.stockReasons.includes(input.stockReason)) fields[`${field}.stockReason`] = 'Choose a listed reason';
+    if (isBelowFullMarks(criterion, input.score) && !input.comment.trim()) fields[`${field}.comment`] = 'Explain what falls short';
+  }
+  const sheet: ScoreSheet = Object.fromEntries(criteria.map((c) => [c.key, applies[c.key] ? (byKey.get(c.key)?.score ?? undefined) : null]));
+  return { fields, sheet };
+}
+
+async function revisionOf(jobId: number, number: number) {
+  const revision = await CaptureRevision.findOne({ where: { jobId, number } });
+  if (!revision) throw notFound('Revision');
+  return revision;
+}
+
+export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: number | null): Promise<Workspace> {
+  const job = await Job.findByPk(jobId, {
+    include: [
+      { model: User, as: 'technician', attributes: ['id', 'name'] },
+      { model: User, as: 'claimedBy', attributes: ['id', 'name'], required: false },
+    ],
+  });
+  if (!job || job.currentRevision === 0) throw notFound('Submitted job');
+  let number = job.currentRevision;
+  if (secondReviewId !== null) {
+    const second = await SecondReview.findOne({ where: { id: secondReviewId, jobId } });
+    if (!second) throw notFound('Second review');
+    if (second.firstReviewerId === actor.id) throw forbidden('A blind second review must be made by another reviewer.');
+    number = second.revisionNumber;
+  }
+  const [revision, rubric] = await Promise.all([revisionOf(jobId, number), currentRubric()]);
+  // Working on the job counts as activity: the claimant's claim is extended.
+  if (secondReviewId === null && job.claimedById === actor.id && job.claimExpiresAt && job.claimExpiresAt > new Date()) {
+    job.claimExpiresAt = new Date(Date.now() + config.review.claimMinutes * 60_000);
+    await job.save();
+  }
+  return {
+    job: { ...toQueueRow(job), street: job.street, city: job.city },
+    revision: { number: revision.number, submittedAt: revision.submittedAt.toISOString(), record: revision.data, files: revision.files, findings: revision.findings },
+    rubric: toRubricView(rubric),
+    applicable: applicability(rubric.criteria, revision.data),
+    claimExpiresAt: job.claimExpiresAt ? job.claimExpiresAt.toISOString() : null,
+    secondReviewId,
+  };
+}
+
+export function shouldSampleSecondReview(share: number, random: () => number = Math.random) {
+  return random() < share;
+}
+
+type ReviewInput = { decision: Decision; scores: ScoreInput[] };
+
+// Scores, decision, job state, rework items, the timeline event and the calibration draw:
+// all in one transaction, so a review is either wholly recorded or not at all.
+export async function submitReview(actor: Actor, jobId: number, input: ReviewInput, random: () => number = Math.random) {
+  return sequelize.transaction(async (transaction) => {
+    const job = await Job.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!job) throw notFound('Job');
+    assertHoldsClaim(actor, job);
+    const rubric = await currentRubric(transaction);
+    const revision = await CaptureRevision.findOne({ where: { jobId, number: job.currentRevision }, transaction });
+    if (!revision) throw notFound('Revision');
+
+    const { fields, sheet } = validateScores(rubric.criteria, revision.data, input.scores);
+    const evaluation = evaluate(rubric, sheet);
+    if (input.decision === 'accept' && Object.keys(fields).length === 0 && !evaluation.passed) {
+      fields.decision = `A failing review cannot be accepted: ${evaluation.failedRules.join(' ')}`;
+    }
+    if (Object.keys(fields).length) throw invalid(fields);
+
+    const now = new Date();
+    const review = await Review.create(
+      {
+        jobId, revisionNumber: revision.number, reviewerId: actor.id, rubricId: rubric.id, kind: 'primary',
+        score: evaluation.score, passed: evaluation.passed, decision: input.decision,
+        claimedAt: job.claimedAt, decidedAt: now, dueAt: job.effectiveDueAt,
+      },
+      { transaction },
+    );
+    await saveScores(review.id, rubric.criteria, input.scores, transaction);
+
+    if (input.decision === 'rework') {
+      const failing = rubric.criteria.filter((c) => isBelowFullMarks(c, sheet[c.key]));
+      const byKey = new Map(input.scores.map((s) => [s.key, s]));
+      await ReworkItem.bulkCreate(
+        failing.map((c) => ({
+          reviewId: review.id, jobId, criterionKey: c.key, title: c.title,
+          instruction: byKey.get(c.key)!.comment.trim(), stockReason: byKey.get(c.key)!.stockReason,
+          response: null, responseNote: null, respondedAt: null, disputeOutcome: null, disputeNote: null, disputeDecidedById: null, disputeDecidedAt: null,
+        })),
+        { transaction },
+      );
+      pauseDueClock(job, now);
+    }
+    job.status = input.decision === 'accept' ? 'accepted' : input.decision === 'rework' ? 'rework_requested' : 'recapture_required';
+    job.claimedById = null;
+    job.claimedAt = null;
+    job.claimExpiresAt = null;
+    await job.save({ transaction });
+    await recordEvent(transaction, jobId, actor.id, 'reviewed', {
+      decision: input.decision, score: evaluation.score, passed: evaluation.passed, rubricVersion: rubric.version, revision: revision.number,
+    });
+
+    const sampled = input.decision === 'accept' && shouldSampleSecondReview(config.review.secondReviewShare, random);
+    if (sampled) {
+      await SecondReview.create({ jobId, revisionNumber: revision.number, firstReviewId: review.id, firstReviewerId: actor.id, secondReviewId: null, claimedById: null, claimExpiresAt: null }, { transaction });
+    }
+    return { reviewId: review.id, score: evaluation.score, passed: evaluation.passed, decision: input.decision, failedRules: evaluation.failedRules, sampledForSecondReview: sampled };
+  });
+}
+
+async function saveScores(reviewId: number, criteria: Criterion[], scores: ScoreInput[], transaction: import('sequelize').Transaction) {
+  const byKey = new Map(scores.map((s) => [s.key, s]));
+  await ReviewScore.bulkCreate(
+    criteria.map((c) => {
+      const s = byKey.get(c.key);
+      return { reviewId, criterionKey: c.key, score: s?.score ?? null, stockReason: s?.stockReason || null, comment: s?.comment.trim() || null, carriedOver: false };
+    }),
+    { transaction },
+  );
+}
+
+export async function listOpenSecondReviews(actor: Actor) {
+  const rows = await SecondReview.findAll({
+    where: {
+      secondReviewId: null,
+      firstReviewerId: { [Op.ne]: actor.id },
+      [Op.or]: [{ claimedById: null }, { claimedById: actor.id }, { claimExpiresAt: { [Op.lt]: new Date() } }],
+    },
+    order: [['createdAt', 'ASC']],
+    limit: 50,
+  });
+  const jobs = await Job.findAll({ where: { id: { [Op.in]: rows.map((r) => r.jobId) } }, attributes: ['id', 'claimReference'] });
+  const refOf = new Map(jobs.map((j) => [j.id, j.claimReference]));
+  return rows.map((r) => ({ id: r.id, jobId: r.jobId, claimReference: refOf.get(r.jobId) ?? '', revision: r.revisionNumber, createdAt: r.createdAt.toISOString() }));
+}
+
+// The second reviewer scores blind: the first score is never sent, and the job's state
+// does not change. The pair feeds the calibration trend.
+export async function submitSecondReview(actor: Actor, secondReviewId: number, input: ReviewInput) {
+  return sequelize.transaction(async (transaction) => {
+    const second = await SecondReview.findByPk(secondReviewId, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!second) throw notFound('Second review');
+    if (second.firstReviewerId === actor.id) throw forbidden('A blind second review must be made by another reviewer.');
+    if (second.secondReviewId !== null) throw conflict('This second review is already done.');
+    const first = await Review.findByPk(second.firstReviewId, { transaction });
+    const rubric = await Rubric.findByPk(first!.rubricId, { transaction });
+    const revision = await CaptureRevision.findOne({ where: { jobId: second.jobId, number: second.revisionNumber }, transaction });
+    const { fields, sheet } = validateScores(rubric!.criteria, revision!.data, input.scores);
+    if (Object.keys(fields).length) throw invalid(fields);
+    const evaluation = evaluate(rubric!, sheet);
+    const job = await Job.findByPk(second.jobId, { transaction });
+    const review = await Review.create(
+      {
+        jobId: second.jobId, revisionNumber: second.revisionNumber, reviewerId: actor.id, rubricId: rubric!.id, kind: 'blind_second',
+        score: evaluation.score, passed: evaluation.passed, decision: input.decision, claimedAt: null, decidedAt: new Date(), dueAt: job!.effectiveDueAt,
+      },
+      { transaction },
+    );
+    await saveScores(review.id, rubric!.criteria, input.scores, transaction);
+    second.secondReviewId = review.id;
+    await second.save({ transaction });
+    await recordEvent(transaction, second.jobId, actor.id, 'blind_second_review', { revision: second.revisionNumber });
+    return { reviewId: review.id, score: evaluation.score, passed: evaluation.passed };
+  });
+}

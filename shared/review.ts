@@ -1,0 +1,64 @@
+// Shapes shared by the review API and screens.
+import type { CaptureRecord, CameraClass } from './capture-record';
+import type { StoredFile } from './files';
+import type { JobStatus, LossType, Priority, PropertyType } from './jobs';
+import type { CheckResult } from './pre-submit-checks';
+import type { Rubric } from './rubric';
+
+export const DECISIONS = ['accept', 'rework', 'recapture'] as const;
+export type Decision = (typeof DECISIONS)[number];
+export const DECISION_LABELS: Record<Decision, string> = {
+  accept: 'Accept',
+  rework: 'Request rework',
+  recapture: 'Recapture required (new site visit)',
+};
+
+export const QUEUE_STATUSES: JobStatus[] = ['submitted', 'in_review', 'resubmitted', 'rework_requested'];
+export const QUEUE_SORTS = ['due', 'submitted', 'claim', 'technician', 'priority', 'revision'] as const;
+export type QueueSort = (typeof QUEUE_SORTS)[number];
+
+export type QueueFilters = {
+  status?: JobStatus[];
+  technicianId?: number;
+  lossType?: LossType;
+  priority?: Priority;
+  cameraClass?: CameraClass;
+  submission?: 'first' | 'resubmission';
+  claimedByMe?: boolean;
+};
+
+export type QueueRow = {
+  id: number;
+  claimReference: string;
+  technician: { id: number; name: string };
+  propertyType: PropertyType;
+  lossType: LossType;
+  cameraClass: CameraClass | null;
+  revision: number;
+  submittedAt: string | null;
+  dueAt: string;
+  priority: Priority;
+  status: JobStatus;
+  claimedBy: { id: number; name: string } | null;
+  waitingOn: 'reviewer' | 'technician';
+  pausedMs: number;
+};
+
+export type QueuePage = {
+  rows: QueueRow[];
+  total: number;
+  page: number;
+  pageSize: number;
+  counts: Partial<Record<JobStatus, number>>;
+};
+
+export type ScoreInput = { key: string; score: number | null; stockReason: string | null; comment: string };
+
+export type Workspace = {
+  job: QueueRow & { street: string; city: string };
+  revision: { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult };
+  rubric: Rubric;
+  applicable: Record<string, boolean>;
+  claimExpiresAt: string | null;
+  secondReviewId: number | null;
+};
