@@ -9,6 +9,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/jobs', label: 'Jobs', roles: ['manager', 'admin'] },
   { href: '/queue', label: 'Queue', roles: ['reviewer', 'manager'] },
   { href: '/trends', label: 'Trends', roles: ['manager'] },
+  { href: '/rubric', label: 'Rubric', roles: ['manager'] },
   { href: '/admin/users', label: 'Users', roles: ['admin'] },
 ];
 

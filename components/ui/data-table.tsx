@@ -32,12 +32,22 @@ type Props<T extends RowData> = {
   initialSorting?: SortingState;
   getRowId?: (row: T) => string;
   onRowPress?: (row: T) => void;
+  // Server-side sorting: the parent owns the sort state and fetches rows in that order.
+  sorting?: SortingState;
+  onSortingChange?: (sorting: SortingState) => void;
+  selectedRowId?: string | null;
 };
 
 const SORT_WORD = { asc: 'ascending', desc: 'descending' } as const;
 
-export function DataTable<T extends RowData>({ label, columns, data, emptyText, initialSorting = [], getRowId, onRowPress }: Props<T>) {
-  const [sorting, setSorting] = useState<SortingState>(initialSorting);
+export function DataTable<T extends RowData>({ label, columns, data, emptyText, initialSorting = [], getRowId, onRowPress, sorting: controlled, onSortingChange, selectedRowId }: Props<T>) {
+  const [localSorting, setLocalSorting] = useState<SortingState>(initialSorting);
+  const sorting = controlled ?? localSorting;
+  const setSorting = (updater: SortingState | ((old: SortingState) => SortingState)) => {
+    const next = typeof updater === 'function' ? updater(sorting) : updater;
+    if (onSortingChange) onSortingChange(next);
+    else setLocalSorting(next);
+  };
   const withTextCells = useMemo(
     () => columns.map((column) => (column.cell ? column : { ...column, cell: (info: { getValue: () => unknown }) => plainCell(info.getValue()) })),
     [columns],
@@ -48,6 +58,7 @@ export function DataTable<T extends RowData>({ label, columns, data, emptyText, 
     data,
     state: { sorting },
     onSortingChange: setSorting,
+    manualSorting: Boolean(onSortingChange),
     getRowId: getRowId ? (row: T) => getRowId(row) : undefined,
   });
 
@@ -97,8 +108,10 @@ export function DataTable<T extends RowData>({ label, columns, data, emptyText, 
                 {renderCell(flexRender(cell.column.columnDef.cell, cell.getContext()))}
               </View>
             ));
+            const selected = selectedRowId === row.id;
             return onRowPress ? (
-              <Pressable role="row" key={row.id} onPress={() => onRowPress(row.original)} style={(state) => [styles.row, (state as { focused?: boolean }).focused && styles.focused]}>
+              <Pressable role="row" key={row.id} aria-selected={selected} onPress={() => onRowPress(row.original)}
+                style={(state) => [styles.row, selected && styles.selected, (state as { focused?: boolean }).focused && styles.focused]}>
                 {cells}
               </Pressable>
             ) : (
@@ -127,5 +140,6 @@ const styles = StyleSheet.create({
   headerRow: { backgroundColor: colors.paper },
   cell: { paddingHorizontal: space.md, paddingVertical: space.sm, flexGrow: 1 },
   headerText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
+  selected: { backgroundColor: '#FBEDE6', borderLeftWidth: 4, borderLeftColor: colors.accent },
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid' } as object,
 });

@@ -53,7 +53,7 @@ const ROUTES: Record<string, RouteCase> = {
     allowed: ['admin'],
     prepare: async () => ({ path: `/api/users/${(await createUser()).id}`, body: { role: 'reviewer' } }),
   },
-  'GET /api/technicians': { allowed: ['manager', 'admin'] },
+  'GET /api/technicians': { allowed: ['reviewer', 'manager', 'admin'] },
   'GET /api/jobs': { allowed: [...ROLES] },
   'POST /api/jobs': {
     allowed: ['manager', 'admin'],

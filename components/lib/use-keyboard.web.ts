@@ -1,0 +1,25 @@
+import { useEffect, useRef } from 'react';
+import type { KeyHandlers } from './use-keyboard';
+
+export type { KeyHandlers };
+
+const TYPING = new Set(['INPUT', 'TEXTAREA', 'SELECT']);
+
+// Single-key shortcuts on desktop. Keys are ignored while the person is typing in a field,
+// and never fire with Ctrl, Alt or Meta held, so browser shortcuts keep working.
+export function useKeyboard(handlers: KeyHandlers, enabled = true) {
+  const latest = useRef(handlers);
+  latest.current = handlers;
+  useEffect(() => {
+    if (!enabled) return;
+    const onKey = (event: KeyboardEvent) => {
+      if (event.ctrlKey || event.altKey || event.metaKey) return;
+      const target = event.target as HTMLElement | null;
+      if (target && (TYPING.has(target.tagName) || target.isContentEditable)) return;
+      const handler = latest.current[event.key];
+      if (handler) handler(event);
+    };
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [enabled]);
+}

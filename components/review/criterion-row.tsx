@@ -1,0 +1,109 @@
+import { useEffect, useRef } from 'react';
+import { Pressable, StyleSheet, TextInput, View } from 'react-native';
+import { scaleMax, type Criterion } from '@/shared/rubric';
+import { isBelowFullMarks } from '@/shared/scoring';
+import { Badge } from '@/components/ui/badge';
+import { Text } from '@/components/ui/text';
+import { colors, fonts, space } from '@/components/ui/theme';
+
+export type CriterionEntry = { score: number | null | undefined; stockReason: string | null; comment: string };
+
+type Props = {
+  criterion: Criterion;
+  applies: boolean;
+  entry: CriterionEntry;
+  current: boolean;
+  error?: string;
+  onChange: (entry: CriterionEntry) => void;
+  onFocus: () => void;
+};
+
+export function CriterionRow({ criterion, applies, entry, current, error, onChange, onFocus }: Props) {
+  const max = scaleMax(criterion.scale);
+  const choices = criterion.scale.kind === 'levels'
+    ? criterion.scale.levels.map((label, value) => ({ value, short: String(value), label: `${value}: ${label}` }))
+    : [{ value: 0, short: 'Fail', label: 'Fail' }, { value: 1, short: 'Pass', label: 'Pass' }];
+  const needsComment = isBelowFullMarks(criterion, entry.score);
+  const ref = useRef<View>(null);
+  // Keyboard scoring moves the current criterion; keep it on screen (web only: a DOM node).
+  useEffect(() => {
+    if (current) (ref.current as unknown as { scrollIntoView?: (o: object) => void } | null)?.scrollIntoView?.({ block: 'nearest' });
+  }, [current]);
+
+  return (
+    <View ref={ref} style={[styles.row, current && styles.current]} role="group" aria-label={criterion.title} aria-current={current ? 'step' : undefined}>
+      <Pressable onPress={onFocus} accessibilityLabel={`Go to ${criterion.title}`} style={styles.head}>
+        <Text variant="label" style={{ flexShrink: 1 }}>{criterion.title}</Text>
+        <View style={styles.badges}>
+          {criterion.critical ? <Badge label="Critical" tone="fail" /> : null}
+          <Badge label={`Weight ${criterion.weight}`} />
+        </View>
+      </Pressable>
+      <Text variant="muted">{criterion.guidance}</Text>
+      {!applies ? (
+        <Text style={{ fontFamily: fonts.semibold }}>Not applicable to this record: left out of the score.</Text>
+      ) : (
+        <>
+          <View style={styles.choices} role="radiogroup" aria-label={`Score for ${criterion.title}`}>
+            {choices.map((choice) => {
+              const selected = entry.score === choice.value;
+              return (
+                <Pressable key={choice.value} role="radio" aria-checked={selected} accessibilityLabel={`${criterion.title}: ${choice.label}`}
+                  onPress={() => { onFocus(); onChange({ ...entry, score: choice.value }); }}
+                  style={[styles.choice, selected && styles.choiceSelected]}>
+                  <Text style={[styles.choiceText, selected && { color: colors.surface }]}>{choice.short}</Text>
+                </Pressable>
+              );
+            })}
+          </View>
+          {entry.score !== undefined && entry.score !== null && criterion.scale.kind === 'levels' ? (
+            <Text variant="small">{`${entry.score} of ${max}: ${criterion.scale.levels[entry.score]}`}</Text>
+          ) : null}
+          {needsComment ? (
+            <>
+              {criterion.stockReasons.length ? (
+                <View style={styles.choices} role="radiogroup" aria-label={`Reason for ${criterion.title}`}>
+                  {criterion.stockReasons.map((reason) => {
+                    const selected = entry.stockReason === reason;
+                    return (
+                      <Pressable key={reason} role="radio" aria-checked={selected} accessibilityLabel={reason}
+                        onPress={() => onChange({ ...entry, stockReason: selected ? null : reason })}
+                        style={[styles.reason, selected && styles.choiceSelected]}>
+                        <Text variant="small" style={selected ? { color: colors.surface } : undefined}>{reason}</Text>
+                      </Pressable>
+                    );
+                  })}
+                </View>
+              ) : null}
+              <TextInput
+                accessibilityLabel={`Comment for ${criterion.title}`}
+                placeholder="What falls short, and what the technician should do (required)"
+                placeholderTextColor={colors.muted}
+                value={entry.comment}
+                onChangeText={(comment) => onChange({ ...entry, comment })}
+                onFocus={onFocus}
+                multiline
+                style={[styles.comment, (error || !entry.comment.trim()) && styles.commentMissing]}
+              />
+            </>
+          ) : null}
+          {error ? <Text role="alert" style={{ color: colors.fail }}>{error}</Text> : null}
+        </>
+      )}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  row: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, padding: space.md, gap: space.xs, backgroundColor: colors.surface },
+  current: { borderColor: colors.accent, borderWidth: 2 },
+  head: { flexDirection: 'row', justifyContent: 'space-between', gap: space.sm, alignItems: 'center' },
+  badges: { flexDirection: 'row', gap: space.xs },
+  choices: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+  choice: { minWidth: 44, minHeight: 36, borderWidth: 1, borderColor: colors.ink, borderRadius: 4, alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.sm },
+  choiceSelected: { backgroundColor: colors.ink },
+  choiceText: { fontFamily: fonts.semibold, color: colors.ink },
+  reason: { borderWidth: 1, borderColor: colors.muted, borderRadius: 12, paddingHorizontal: space.sm, paddingVertical: 4 },
+  comment: { minHeight: 64, borderWidth: 1, borderColor: colors.muted, borderRadius: 6, padding: space.sm, fontFamily: fonts.regular, fontSize: 15, color: colors.ink, backgroundColor: colors.surface },
+  commentMissing: { borderColor: colors.rework, borderWidth: 2 },
+});

@@ -1,0 +1,116 @@
+import { useLocalSearchParams, useRouter } from 'expo-router';
+import { useMemo, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import type { SortingState } from '@tanstack/react-table';
+import { JOB_STATUS_LABELS } from '@/shared/jobs';
+import { queueSearch, QUEUE_PARAM_KEYS, type QueueParams } from '@/shared/queue-params';
+import type { QueueRow, QueueSort } from '@/shared/review';
+import { useKeyboard } from '@/components/lib/use-keyboard';
+import { useTechniciansQuery } from '@/components/queries/jobs';
+import { useClaimMutation, useQueueQuery } from '@/components/queries/reviews';
+import { useSessionQuery } from '@/components/queries/session';
+import { Button } from '@/components/ui/button';
+import { DataTable } from '@/components/ui/data-table';
+import { HelpOverlay } from '@/components/ui/help-overlay';
+import { Notice } from '@/components/ui/notice';
+import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
+import { colors, space } from '@/components/ui/theme';
+import { queueColumns } from './queue-columns';
+import { QueueFilters } from './queue-filters';
+import { ReassignPanel } from './reassign-panel';
+import { SecondReviewList } from './second-review-list';
+
+const KEYS = [
+  { keys: '↓ or j', action: 'Next row' },
+  { keys: '↑ or k', action: 'Previous row' },
+  { keys: 'Enter', action: 'Open the selected job' },
+  { keys: 'c', action: 'Claim the selected job and open it' },
+  { keys: '] / [', action: 'Next / previous page' },
+  { keys: '?', action: 'Show or hide these keys' },
+];
+
+export function QueueScreen() {
+  const router = useRouter();
+  const { data: me } = useSessionQuery();
+  const raw = useLocalSearchParams<QueueParams>();
+  const params = useMemo(() => Object.fromEntries(QUEUE_PARAM_KEYS.map((k) => [k, typeof raw[k] === 'string' ? raw[k] : ''])) as QueueParams, [raw]);
+  const search = queueSearch(params);
+  const queue = useQueueQuery(search);
+  const technicians = useTechniciansQuery();
+  const claim = useClaimMutation();
+  const [selected, setSelected] = useState(0);
+  const [help, setHelp] = useState(false);
+  const isReviewer = me?.role === 'reviewer';
+
+  const rows = queue.data?.rows ?? [];
+  const page = queue.data?.page ?? 1;
+  const pages = queue.data ? Math.max(1, Math.ceil(queue.data.total / queue.data.pageSize)) : 1;
+  const setParams = (changes: QueueParams) => router.setParams(changes as never);
+  const open = (row: QueueRow | undefined) => row && router.push(`/queue/${row.id}` as never);
+  const claimAndOpen = async (row: QueueRow | undefined) => {
+    if (!row || !isReviewer) return;
+    await claim.mutateAsync(row.id).then(() => open(row)).catch(() => undefined);
+  };
+
+  useKeyboard({
+    ArrowDown: (e) => { e.preventDefault(); setSelected((i) => Math.min(i + 1, rows.length - 1)); },
+    j: () => setSelected((i) => Math.min(i + 1, rows.length - 1)),
+    ArrowUp: (e) => { e.preventDefault(); setSelected((i) => Math.max(i - 1, 0)); },
+    k: () => setSelected((i) => Math.max(i - 1, 0)),
+    Enter: () => open(rows[selected]),
+    c: () => void claimAndOpen(rows[selected]),
+    ']': () => page < pages && setParams({ page: String(page + 1) }),
+    '[': () => page > 1 && setParams({ page: String(page - 1) }),
+    '?': () => setHelp((h) => !h),
+  }, !help);
+
+  const sorting: SortingState = params.sort ? [{ id: params.sort === 'claim' ? 'claim' : params.sort, desc: params.dir === 'desc' }] : [];
+  const columns = useMemo(() => queueColumns(new Date(), me?.id), [me?.id, queue.dataUpdatedAt]);
+  const counts = queue.data?.counts ?? {};
+
+  return (
+    <Screen
+      title="Queue"
+      subtitle="Capture records waiting for review. Overdue first, then by due time and priority."
+      actions={<Button label="Keyboard keys (?)" tone="secondary" onPress={() => setHelp(true)} />}
+    >
+      <Text role="status">
+        {(['submitted', 'resubmitted', 'in_review', 'rework_requested'] as const).map((s) => `${JOB_STATUS_LABELS[s]}: ${counts[s] ?? 0}`).join(' · ')}
+      </Text>
+      <QueueFilters params={params} technicians={technicians.data ?? []} onChange={setParams} />
+      {queue.error ? <Notice tone="error">{queue.error.message}</Notice> : null}
+      {claim.error ? <Notice tone="error">{claim.error.message}</Notice> : null}
+      <DataTable
+        label="Review queue"
+        columns={columns}
+        data={rows}
+        emptyText={queue.isPending ? 'Loading the queue…' : 'Nothing waiting with these filters.'}
+        getRowId={(r) => String(r.id)}
+        onRowPress={open}
+        selectedRowId={rows[selected] ? String(rows[selected].id) : null}
+        sorting={sorting}
+        onSortingChange={(next) => setParams({ sort: (next[0]?.id as QueueSort | undefined) ?? '', dir: next[0]?.desc ? 'desc' : 'asc', page: '' })}
+      />
+      <View style={styles.pager}>
+        <Button label="Previous page" tone="secondary" disabled={page <= 1} onPress={() => setParams({ page: String(page - 1) })} />
+        <Text>{`Page ${page} of ${pages} · ${queue.data?.total ?? 0} jobs`}</Text>
+        <Button label="Next page" tone="secondary" disabled={page >= pages} onPress={() => setParams({ page: String(page + 1) })} />
+      </View>
+      {isReviewer && rows[selected] ? (
+        <View style={styles.selectedBar}>
+          <Text>{`Selected: ${rows[selected].claimReference}`}</Text>
+          <Button label={`Claim ${rows[selected].claimReference}`} onPress={() => void claimAndOpen(rows[selected])} busy={claim.isPending} />
+        </View>
+      ) : null}
+      {isReviewer ? <SecondReviewList /> : null}
+      {me?.role === 'manager' ? <ReassignPanel /> : null}
+      <HelpOverlay visible={help} title="Queue keys" keys={KEYS} onClose={() => setHelp(false)} />
+    </Screen>
+  );
+}
+
+const styles = StyleSheet.create({
+  pager: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
+  selectedBar: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap', borderTopWidth: 1, borderTopColor: colors.line, paddingTop: space.md },
+});
