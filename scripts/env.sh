@@ -12,6 +12,7 @@ export SMTP_PORT="${SMTP_PORT:-2525}"
 export MAILBOX_URL="${MAILBOX_URL:-http://127.0.0.1:2580}"
 export S3_ENDPOINT="${S3_ENDPOINT:-http://127.0.0.1:4569}"
 export S3_BUCKET="${S3_BUCKET:-sightline-files}"
+export MAILBOX_OPEN="${MAILBOX_OPEN:-true}"  # development: every role may read the fake mailbox
 export APP_URL="${APP_URL:-http://$HOST:$PORT}"
 export EXPO_OFFLINE=1 EXPO_NO_TELEMETRY=1
 export DATA_DIR="${DATA_DIR:-$PWD/.data}"

@@ -10,6 +10,7 @@ export MAILBOX_URL="http://127.0.0.1:${TEST_MAILBOX_PORT:-2581}"
 export S3_ENDPOINT="http://127.0.0.1:${TEST_S3_PORT:-4570}"
 export S3_BUCKET="sightline-test-files"
 export NODE_ENV=test
+export MAILBOX_OPEN=false  # tests check the production rule: admins only
 source scripts/env.sh
 source scripts/provision.sh
 set -e

@@ -1,6 +1,7 @@
 import { config } from './config';
 import { createApp } from './app';
 import { sequelize } from './models';
+import { startOutboxWorker } from './mail/worker';
 
 async function main() {
   await sequelize.authenticate();
@@ -8,7 +9,9 @@ async function main() {
   const server = app.listen(config.port, config.host, () => {
     console.log(`Sightline API and web app on http://${config.host}:${config.port}`);
   });
+  const stopWorker = startOutboxWorker();
   const stop = () => {
+    stopWorker();
     server.close(() => sequelize.close().finally(() => process.exit(0)));
   };
   process.on('SIGTERM', stop);

@@ -4,6 +4,7 @@ import type { StoredFile } from './files';
 import type { JobStatus, LossType, Priority, PropertyType } from './jobs';
 import type { CheckResult } from './pre-submit-checks';
 import type { Rubric } from './rubric';
+import type { Change } from './revision-diff';
 
 export const DECISIONS = ['accept', 'rework', 'recapture'] as const;
 export type Decision = (typeof DECISIONS)[number];
@@ -61,4 +62,35 @@ export type Workspace = {
   applicable: Record<string, boolean>;
   claimExpiresAt: string | null;
   secondReviewId: number | null;
+  previous: {
+    revision: number;
+    score: number | null;
+    decision: Decision;
+    changes: Change[];
+    items: ReworkItemView[];
+    carried: Record<string, { score: number | null; stockReason: string | null; comment: string }>;
+  } | null;
 };
+
+export const REWORK_RESPONSES = ['fixed', 'cannot_fix', 'disputed'] as const;
+export type ReworkResponse = (typeof REWORK_RESPONSES)[number];
+export const REWORK_RESPONSE_LABELS: Record<ReworkResponse, string> = {
+  fixed: 'Fixed',
+  cannot_fix: 'Cannot fix',
+  disputed: 'Dispute it',
+};
+
+export type ReworkItemView = {
+  id: number;
+  criterionKey: string;
+  title: string;
+  instruction: string;
+  stockReason: string | null;
+  response: ReworkResponse | null;
+  responseNote: string | null;
+  respondedAt: string | null;
+  disputeOutcome: 'upheld' | 'withdrawn' | null;
+  disputeNote: string | null;
+};
+
+export type TimelineEvent = { id: number; type: string; data: Record<string, unknown>; createdAt: string; actor: string | null };

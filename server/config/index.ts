@@ -43,6 +43,16 @@ export const config = {
     port: number('SMTP_PORT', 2525),
     from: env.MAIL_FROM ?? 'Sightline <no-reply@sightline.invalid>',
   },
+  outbox: {
+    // How often each instance's worker looks for e-mail to send (0 turns the worker off).
+    intervalMs: number('OUTBOX_INTERVAL_MS', 3000),
+    lockSeconds: number('OUTBOX_LOCK_SECONDS', 60),
+    maxBackoffSeconds: number('OUTBOX_MAX_BACKOFF_SECONDS', 900),
+  },
+  // Time the technician has to answer a rework request; a reminder goes out after it.
+  reworkHours: number('REWORK_HOURS', 48),
+  // Admins can always read the local fake mailbox; in development everyone can.
+  mailboxOpenToAll: env.MAILBOX_OPEN === 'true',
   mailboxUrl: env.MAILBOX_URL ?? 'http://127.0.0.1:2580',
   s3: {
     endpoint: env.S3_ENDPOINT ?? 'http://127.0.0.1:4569',

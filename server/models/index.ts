@@ -4,6 +4,7 @@ import { CaptureDraft } from './capture-draft';
 import { CaptureRevision } from './capture-revision';
 import { Job } from './job';
 import { AuditEvent, Review, ReviewScore, ReworkItem, Rubric, SecondReview } from './review-models';
+import { OutboxMessage } from './outbox-message';
 import { Session } from './session';
 import { StoredFile } from './stored-file';
 import { User } from './user';
@@ -20,6 +21,7 @@ ReviewScore.initModel(sequelize);
 ReworkItem.initModel(sequelize);
 SecondReview.initModel(sequelize);
 AuditEvent.initModel(sequelize);
+OutboxMessage.initModel(sequelize);
 
 Job.belongsTo(User, { as: 'technician', foreignKey: 'technicianId' });
 Job.belongsTo(User, { as: 'createdBy', foreignKey: 'createdById' });
@@ -33,4 +35,4 @@ Review.hasMany(ReviewScore, { as: 'scores', foreignKey: 'reviewId' });
 Review.hasMany(ReworkItem, { as: 'reworkItems', foreignKey: 'reviewId' });
 AuditEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
 
-export { sequelize, AuditEvent, CaptureDraft, CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, Session, StoredFile, User };
+export { sequelize, AuditEvent, OutboxMessage, CaptureDraft, CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, Session, StoredFile, User };

@@ -2,7 +2,9 @@ import type { Router } from 'express';
 import { filesRouter } from './files';
 import { healthRouter } from './health';
 import { jobsRouter } from './jobs';
+import { mailboxRouter } from './mailbox';
 import { meRouter } from './me';
+import { reworkRouter } from './rework';
 import { queueRouter } from './queue';
 import { reviewsRouter } from './reviews';
 import { rubricsRouter } from './rubrics';
@@ -23,4 +25,6 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api/queue', router: queueRouter },
   { prefix: '/api/rubrics', router: rubricsRouter },
   { prefix: '/api', router: reviewsRouter },
+  { prefix: '/api', router: reworkRouter },
+  { prefix: '/api/mailbox', router: mailboxRouter },
 ];

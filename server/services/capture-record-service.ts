@@ -6,6 +6,7 @@ import { conflict, invalid, notFound } from '../errors';
 import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models';
 import { recordEvent } from './audit-service';
 import { resumeDueClock } from './due-clock';
+import { assertReworkAnswered } from './rework-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 
 type Actor = Express.User;
@@ -53,6 +54,7 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     assertAssignedTechnician(actor, job);
     assertEditable(job.status);
 
+    if (job.status === 'rework_requested') await assertReworkAnswered(jobId, transaction);
     const findings = checkCaptureRecord(record);
     if (findings.missing.length > 0) {
       throw invalid(Object.fromEntries(findings.missing.map((f) => [f.field, f.message])));

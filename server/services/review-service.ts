@@ -9,6 +9,9 @@ import { CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondRe
 import { recordEvent } from './audit-service';
 import { assertHoldsClaim } from './claims-service';
 import { pauseDueClock } from './due-clock';
+import { toReworkItemView } from './rework-service';
+import { queueDecisionEmail } from '../mail/review-emails';
+import { carriesOver, diffRevisions } from '../../shared/revision-diff';
 import { toQueueRow } from './queue-service';
 import { currentRubric, toRubricView } from './rubric-service';
 
@@ -81,6 +84,8 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
     applicable: applicability(rubric.criteria, revision.data),
     claimExpiresAt: job.claimExpiresAt ? job.claimExpiresAt.toISOString() : null,
     secondReviewId,
+    // A blind second reviewer sees nothing of earlier reviews.
+    previous: secondReviewId === null ? await previousContext(jobId, number) : null,
   };
 }
 
@@ -117,11 +122,13 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
       },
       { transaction },
     );
-    await saveScores(review.id, rubric.criteria, input.scores, transaction);
+    const carried = await carriedOverScores(jobId, revision.number, transaction);
+    await saveScores(review.id, rubric.criteria, input.scores, transaction, carried);
 
+    const failing = rubric.criteria.filter((c) => isBelowFullMarks(c, sheet[c.key]));
+    const byKey = new Map(input.scores.map((s) => [s.key, s]));
+    const itemFacts = failing.map((c) => ({ title: c.title, instruction: byKey.get(c.key)!.comment.trim(), stockReason: byKey.get(c.key)!.stockReason || null }));
     if (input.decision === 'rework') {
-      const failing = rubric.criteria.filter((c) => isBelowFullMarks(c, sheet[c.key]));
-      const byKey = new Map(input.scores.map((s) => [s.key, s]));
       await ReworkItem.bulkCreate(
         failing.map((c) => ({
           reviewId: review.id, jobId, criterionKey: c.key, title: c.title,
@@ -140,6 +147,7 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
     await recordEvent(transaction, jobId, actor.id, 'reviewed', {
       decision: input.decision, score: evaluation.score, passed: evaluation.passed, rubricVersion: rubric.version, revision: revision.number,
     });
+    await queueDecisionEmail(transaction, job, input.decision, { revision: revision.number, score: evaluation.score, items: itemFacts, reviewerName: actor.name, decidedAt: now });
 
     const sampled = input.decision === 'accept' && shouldSampleSecondReview(config.review.secondReviewShare, random);
     if (sampled) {
@@ -149,15 +157,58 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
   });
 }
 
-async function saveScores(reviewId: number, criteria: Criterion[], scores: ScoreInput[], transaction: import('sequelize').Transaction) {
+async function saveScores(reviewId: number, criteria: Criterion[], scores: ScoreInput[], transaction: import('sequelize').Transaction, carried: Record<string, number | null> = {}) {
   const byKey = new Map(scores.map((s) => [s.key, s]));
   await ReviewScore.bulkCreate(
     criteria.map((c) => {
       const s = byKey.get(c.key);
-      return { reviewId, criterionKey: c.key, score: s?.score ?? null, stockReason: s?.stockReason || null, comment: s?.comment.trim() || null, carriedOver: false };
+      const score = s?.score ?? null;
+      // Marked carried over when the reviewer kept the score offered from the last review.
+      const carriedOver = c.key in carried && carried[c.key] === score;
+      return { reviewId, criterionKey: c.key, score, stockReason: s?.stockReason || null, comment: s?.comment.trim() || null, carriedOver };
     }),
     { transaction },
   );
+}
+
+// The last primary review of an earlier revision, if any: the one a resubmission answers.
+async function previousReview(jobId: number, currentRevision: number, transaction?: import('sequelize').Transaction) {
+  return Review.findOne({
+    where: { jobId, kind: 'primary', revisionNumber: { [Op.lt]: currentRevision } },
+    order: [['revisionNumber', 'DESC'], ['id', 'DESC']],
+    transaction,
+  });
+}
+
+async function changesSince(jobId: number, previousNumber: number, currentNumber: number, transaction?: import('sequelize').Transaction) {
+  const [before, after] = await Promise.all([
+    CaptureRevision.findOne({ where: { jobId, number: previousNumber }, transaction }),
+    CaptureRevision.findOne({ where: { jobId, number: currentNumber }, transaction }),
+  ]);
+  return diffRevisions({ record: before!.data, files: before!.files }, { record: after!.data, files: after!.files });
+}
+
+// Scores from the previous review for criteria whose inputs did not change.
+export async function carriedOverScores(jobId: number, currentRevision: number, transaction?: import('sequelize').Transaction) {
+  const previous = await previousReview(jobId, currentRevision, transaction);
+  if (!previous) return {};
+  const changes = await changesSince(jobId, previous.revisionNumber, currentRevision, transaction);
+  const scores = await ReviewScore.findAll({ where: { reviewId: previous.id }, transaction });
+  return Object.fromEntries(scores.filter((s) => carriesOver(s.criterionKey, changes)).map((s) => [s.criterionKey, s.score]));
+}
+
+export async function previousContext(jobId: number, currentRevision: number) {
+  const previous = await previousReview(jobId, currentRevision);
+  if (!previous) return null;
+  const changes = await changesSince(jobId, previous.revisionNumber, currentRevision);
+  const [scores, items] = await Promise.all([
+    ReviewScore.findAll({ where: { reviewId: previous.id } }),
+    ReworkItem.findAll({ where: { reviewId: previous.id }, order: [['id', 'ASC']] }),
+  ]);
+  const carried = Object.fromEntries(
+    scores.filter((s) => carriesOver(s.criterionKey, changes)).map((s) => [s.criterionKey, { score: s.score, stockReason: s.stockReason, comment: s.comment ?? '' }]),
+  );
+  return { revision: previous.revisionNumber, score: previous.score, decision: previous.decision, changes, items: items.map(toReworkItemView), carried };
 }
 
 export async function listOpenSecondReviews(actor: Actor) {

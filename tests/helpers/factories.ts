@@ -1,6 +1,6 @@
 import crypto from 'node:crypto';
 import type { Role } from '../../shared/roles';
-import { CaptureDraft, CaptureRevision, Job, Review, Rubric, SecondReview, User } from '../../server/models';
+import { CaptureDraft, CaptureRevision, Job, Review, ReworkItem, Rubric, SecondReview, User } from '../../server/models';
 import { criterionApplies, scaleMax } from '../../shared/rubric';
 import type { CaptureRecord } from '../../shared/capture-record';
 import { completeRecord } from './records';
@@ -109,4 +109,21 @@ export async function secondReviewByAnother() {
   });
   await job.update({ status: 'accepted' });
   return SecondReview.create({ jobId: job.id, revisionNumber: 1, firstReviewId: review.id, firstReviewerId: first.id, secondReviewId: null, claimedById: null, claimExpiresAt: null });
+}
+
+// A job whose revision 1 got a rework request with one item ("coverage").
+export async function reworkRequested(technicianId?: number) {
+  const reviewer = await createUser({ role: 'reviewer' });
+  const job = await createSubmittedJob({ technicianId });
+  const rubric = await Rubric.findOne({ order: [['version', 'DESC']] });
+  const review = await Review.create({
+    jobId: job.id, revisionNumber: 1, reviewerId: reviewer.id, rubricId: rubric!.id, kind: 'primary', score: 80, passed: false,
+    decision: 'rework', claimedAt: null, decidedAt: new Date(), dueAt: job.effectiveDueAt,
+  });
+  const item = await ReworkItem.create({
+    reviewId: review.id, jobId: job.id, criterionKey: 'coverage', title: 'Coverage completeness', instruction: 'Capture the attic', stockReason: null,
+    response: null, responseNote: null, respondedAt: null, disputeOutcome: null, disputeNote: null, disputeDecidedById: null, disputeDecidedAt: null,
+  });
+  await job.update({ status: 'rework_requested', pausedAt: new Date() });
+  return { job, review, item, reviewer };
 }

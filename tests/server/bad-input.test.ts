@@ -3,7 +3,7 @@
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/models';
 import type { Role } from '../../shared/roles';
-import { claimFor, createJob, createSubmittedJob, createUser, secondReviewByAnother } from '../helpers/factories';
+import { claimFor, createJob, createSubmittedJob, createUser, reworkRequested, secondReviewByAnother } from '../helpers/factories';
 import { completeRecord } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
 import { countRows, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
@@ -97,6 +97,16 @@ const CASES: Record<string, BadInputCase> = {
     as: 'manager', tables: ['rubrics'],
     body: { passMark: 120, criteria: [{ key: 'Bad Key', title: 'x', guidance: '', weight: 0, critical: 'no', appliesWhen: 'sometimes', scale: { kind: 'stars' }, stockReasons: [] }] },
     fields: ['criteria', 'criteria.0.appliesWhen', 'criteria.0.critical', 'criteria.0.key', 'criteria.0.scale.kind', 'criteria.0.title', 'criteria.0.weight', 'passMark'],
+  },
+  'PUT /api/rework-items/:id/response': {
+    as: 'technician', tables: ['audit_events'],
+    prepare: async (me) => ({ path: `/api/rework-items/${(await reworkRequested(me.id)).item.id}/response` }),
+    body: { response: 'shrug', note: 7 }, fields: ['note', 'response'],
+  },
+  'PUT /api/rework-items/:id/dispute-outcome': {
+    as: 'manager', tables: ['audit_events'],
+    prepare: async () => ({ path: `/api/rework-items/${(await reworkRequested()).item.id}/dispute-outcome` }),
+    body: { outcome: 'maybe' }, fields: ['note', 'outcome'],
   },
 };
 

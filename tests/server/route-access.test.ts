@@ -7,7 +7,7 @@ import { sequelize } from '../../server/models';
 import { ROLES, type Role } from '../../shared/roles';
 import { createUser, TEST_PASSWORD } from '../helpers/factories';
 import { clientAgent, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
-import { claimFor, createJob, createSubmittedJob, fullScores, newJobBody, secondReviewByAnother } from '../helpers/factories';
+import { claimFor, createJob, createSubmittedJob, fullScores, newJobBody, reworkRequested, secondReviewByAnother } from '../helpers/factories';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { completeRecord } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
@@ -142,6 +142,25 @@ const ROUTES: Record<string, RouteCase> = {
   'GET /api/rubrics': { allowed: ['reviewer', 'manager'] },
   'GET /api/rubrics/current': { allowed: ['reviewer', 'manager'] },
   'POST /api/rubrics': { allowed: ['manager'], prepare: async () => ({ body: DEFAULT_RUBRIC }) },
+  'GET /api/jobs/:id/rework-items': { allowed: [...ROLES], prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/rework-items` }) },
+  'PUT /api/rework-items/:id/response': {
+    allowed: ['technician'],
+    prepare: async (me) => {
+      const { item } = await reworkRequested(me?.role === 'technician' ? me.id : undefined);
+      return { path: `/api/rework-items/${item.id}/response`, body: { response: 'fixed', note: 'Added two stations' } };
+    },
+  },
+  'GET /api/disputes': { allowed: ['manager'] },
+  'PUT /api/rework-items/:id/dispute-outcome': {
+    allowed: ['manager'],
+    prepare: async () => {
+      const { item } = await reworkRequested();
+      await item.update({ response: 'disputed', responseNote: 'The attic hatch was sealed', respondedAt: new Date() });
+      return { path: `/api/rework-items/${item.id}/dispute-outcome`, body: { outcome: 'withdrawn', note: 'Sealed hatch confirmed' } };
+    },
+  },
+  'GET /api/jobs/:id/timeline': { allowed: [...ROLES], prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/timeline` }) },
+  'GET /api/mailbox': { allowed: ['admin'] },
 };
 
 // A job the signed-in technician owns (anyone else's job for the other roles).

@@ -1,0 +1,77 @@
+import nodemailer, { type Transporter } from 'nodemailer';
+import { Op, type Transaction } from 'sequelize';
+import { config } from '../config';
+import { OutboxMessage, sequelize } from '../models';
+import { recordEvent } from '../services/audit-service';
+import type { Email } from './templates';
+
+export async function enqueueEmail(
+  transaction: Transaction,
+  message: Email & { jobId: number | null; kind: string; to: string[]; dedupeKey?: string },
+) {
+  const row = await OutboxMessage.create(
+    {
+      jobId: message.jobId, kind: message.kind, dedupeKey: message.dedupeKey ?? null, recipients: message.to,
+      subject: message.subject, textBody: message.text, htmlBody: message.html,
+      nextAttemptAt: new Date(), lastError: null, lockedBy: null, lockedUntil: null, sentAt: null,
+    },
+    { transaction },
+  );
+  if (message.jobId) await recordEvent(transaction, message.jobId, null, 'email_queued', { outboxId: row.id, kind: message.kind, to: message.to });
+  return row;
+}
+
+export function createTransport(port = config.smtp.port, host = config.smtp.host): Transporter {
+  return nodemailer.createTransport({ host, port, secure: false, ignoreTLS: true, connectionTimeout: 5000, greetingTimeout: 5000, socketTimeout: 10_000 });
+}
+
+// Exponential backoff: 5 s, 10 s, 20 s, … up to the configured ceiling.
+export function backoffSeconds(attempts: number) {
+  return Math.min(5 * 2 ** Math.max(attempts - 1, 0), config.outbox.maxBackoffSeconds);
+}
+
+// One pass of the worker. A row is first leased to this instance with a conditional UPDATE,
+// so two workers (or two instances) never send the same row.
+export async function sendPendingEmails(transport: Transporter, instanceId = config.instanceId, now = new Date()) {
+  const leaseUntil = new Date(now.getTime() + config.outbox.lockSeconds * 1000);
+  await OutboxMessage.update(
+    { lockedBy: instanceId, lockedUntil: leaseUntil },
+    {
+      where: {
+        status: 'pending',
+        nextAttemptAt: { [Op.lte]: now },
+        [Op.or]: [{ lockedUntil: null }, { lockedUntil: { [Op.lt]: now } }],
+      },
+      limit: 20,
+    },
+  );
+  const leased = await OutboxMessage.findAll({ where: { lockedBy: instanceId, lockedUntil: leaseUntil, status: 'pending' }, order: [['id', 'ASC']] });
+  let sent = 0;
+  for (const message of leased) {
+    try {
+      await transport.sendMail({
+        from: config.smtp.from,
+        to: message.recipients,
+        subject: message.subject,
+        text: message.textBody,
+        html: message.htmlBody,
+        messageId: `<outbox-${message.id}@sightline.invalid>`,
+      });
+      await sequelize.transaction(async (transaction) => {
+        await message.update({ status: 'sent', sentAt: new Date(), attempts: message.attempts + 1, lastError: null, lockedBy: null, lockedUntil: null }, { transaction });
+        if (message.jobId) await recordEvent(transaction, message.jobId, null, 'email_sent', { outboxId: message.id, kind: message.kind });
+      });
+      sent += 1;
+    } catch (error) {
+      const attempts = message.attempts + 1;
+      await sequelize.transaction(async (transaction) => {
+        await message.update(
+          { attempts, lastError: (error as Error).message.slice(0, 2000), nextAttemptAt: new Date(Date.now() + backoffSeconds(attempts) * 1000), lockedBy: null, lockedUntil: null },
+          { transaction },
+        );
+        if (message.jobId) await recordEvent(transaction, message.jobId, null, 'email_failed', { outboxId: message.id, kind: message.kind, attempt: attempts, error: (error as Error).message.slice(0, 200) });
+      });
+    }
+  }
+  return { leased: leased.length, sent };
+}

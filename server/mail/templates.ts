@@ -1,0 +1,71 @@
+// Sightline's e-mails, in plain text and HTML, in our own words.
+import { DECISION_LABELS } from '../../shared/review';
+
+export type Email = { subject: string; text: string; html: string };
+
+const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+
+function layout(title: string, paragraphs: string[], items: string[] = [], link?: { url: string; label: string }): string {
+  return [
+    '<!doctype html><html><body style="font-family:Arial,sans-serif;color:#1B2430;background:#F7F5F0;padding:16px">',
+    `<h1 style="font-size:20px;border-bottom:3px solid #C4572A;padding-bottom:6px">${escape(title)}</h1>`,
+    ...paragraphs.map((p) => `<p>${escape(p)}</p>`),
+    items.length ? `<ol>${items.map((i) => `<li style="margin-bottom:8px">${i}</li>`).join('')}</ol>` : '',
+    link ? `<p><a href="${escape(link.url)}" style="color:#C4572A;font-weight:bold">${escape(link.label)}</a></p>` : '',
+    '<p style="color:#6B7280;font-size:12px">Sent by Sightline. Reply to your reviewer or manager, not to this address.</p>',
+    '</body></html>',
+  ].join('');
+}
+
+type JobFacts = { claimReference: string; street: string; city: string; jobUrl: string };
+export type ReworkItemFacts = { title: string; instruction: string; stockReason: string | null };
+
+export function reworkRequestEmail(job: JobFacts, revision: number, items: ReworkItemFacts[], reworkDueAt: Date, reviewerName: string): Email {
+  const due = reworkDueAt.toUTCString();
+  const subject = `Rework requested: ${job.claimReference}, revision ${revision}`;
+  const lines = items.map((item, i) => `${i + 1}. ${item.title}${item.stockReason ? ` (${item.stockReason})` : ''}: ${item.instruction}`);
+  const text = [
+    `${reviewerName} reviewed revision ${revision} of the capture record for claim ${job.claimReference} (${job.street}, ${job.city}) and asks for rework on ${items.length} item(s):`,
+    '',
+    ...lines,
+    '',
+    `Please answer each item and resubmit by ${due}.`,
+    `Open the job: ${job.jobUrl}`,
+  ].join('\n');
+  const html = layout(
+    `Rework requested for ${job.claimReference}`,
+    [`${reviewerName} reviewed revision ${revision} for ${job.street}, ${job.city} and asks for rework on ${items.length} item(s).`, `Please answer each item and resubmit by ${due}.`],
+    items.map((item) => `<strong>${escape(item.title)}</strong>${item.stockReason ? ` <em>(${escape(item.stockReason)})</em>` : ''}<br>${escape(item.instruction)}`),
+    { url: job.jobUrl, label: 'Open the job in Sightline' },
+  );
+  return { subject, text, html };
+}
+
+export function acceptedEmail(job: JobFacts, revision: number, score: number | null): Email {
+  const subject = `Accepted: ${job.claimReference}, revision ${revision}`;
+  const scoreText = score === null ? '' : ` with a score of ${score.toFixed(1)}`;
+  const text = `Revision ${revision} of the capture record for claim ${job.claimReference} (${job.street}, ${job.city}) was accepted${scoreText}. Thank you.\n\nOpen the job: ${job.jobUrl}`;
+  return { subject, text, html: layout(`Accepted: ${job.claimReference}`, [`Revision ${revision} for ${job.street}, ${job.city} was accepted${scoreText}. Thank you.`], [], { url: job.jobUrl, label: 'Open the job in Sightline' }) };
+}
+
+export function recaptureEmail(job: JobFacts, revision: number, reasons: ReworkItemFacts[]): Email {
+  const subject = `Recapture required: ${job.claimReference}`;
+  const lines = reasons.map((r) => `- ${r.title}: ${r.instruction}`);
+  const text = [`The capture for claim ${job.claimReference} (${job.street}, ${job.city}), revision ${revision}, cannot be fixed from the office: a new site visit is needed.`, '', ...lines, '', `Open the job: ${job.jobUrl}`].join('\n');
+  return {
+    subject,
+    text,
+    html: layout(`Recapture required: ${job.claimReference}`, [`Revision ${revision} for ${job.street}, ${job.city} cannot be fixed from the office: a new site visit is needed.`],
+      reasons.map((r) => `<strong>${escape(r.title)}</strong><br>${escape(r.instruction)}`), { url: job.jobUrl, label: 'Open the job in Sightline' }),
+  };
+}
+
+export function reworkReminderEmail(job: JobFacts, reworkDueAt: Date, open: number): Email {
+  const subject = `Reminder: rework overdue for ${job.claimReference}`;
+  const text = `The rework for claim ${job.claimReference} (${job.street}, ${job.city}) was due ${reworkDueAt.toUTCString()} and ${open} item(s) are still open. Please answer them and resubmit.\n\nOpen the job: ${job.jobUrl}`;
+  return { subject, text, html: layout(`Rework overdue: ${job.claimReference}`, [`The rework for ${job.street}, ${job.city} was due ${reworkDueAt.toUTCString()}; ${open} item(s) are still open.`], [], { url: job.jobUrl, label: 'Open the job in Sightline' }) };
+}
+
+export function decisionLabel(decision: keyof typeof DECISION_LABELS) {
+  return DECISION_LABELS[decision];
+}

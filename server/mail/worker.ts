@@ -1,0 +1,25 @@
+import { config } from '../config';
+import { createTransport, sendPendingEmails } from './outbox';
+import { queueOverdueReworkReminders } from './reminders';
+
+// Runs in every instance; the outbox leases keep them from sending the same row twice.
+export function startOutboxWorker() {
+  if (config.outbox.intervalMs <= 0) return () => undefined;
+  const transport = createTransport();
+  let running = false;
+  const tick = async () => {
+    if (running) return;
+    running = true;
+    try {
+      await queueOverdueReworkReminders();
+      await sendPendingEmails(transport);
+    } catch (error) {
+      console.error('outbox worker:', (error as Error).message);
+    } finally {
+      running = false;
+    }
+  };
+  const timer = setInterval(() => void tick(), config.outbox.intervalMs);
+  timer.unref();
+  return () => clearInterval(timer);
+}
