@@ -37,7 +37,7 @@ rm -rf "$DATA_DIR/mail/$SMTP_PORT" "$DATA_DIR/s3/${S3_ENDPOINT##*:}"
 start_fakes
 build_web_if_stale
 
-node --import tsx server/index.ts >"$DATA_DIR/log/test-server.log" 2>&1 &
+OUTBOX_INTERVAL_MS=1000 node --import tsx server/index.ts >"$DATA_DIR/log/test-server.log" 2>&1 &
 SERVER_PID=$!
 wait_for_port "$PORT" "Sightline (test)"
 

@@ -11,6 +11,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/trends', label: 'Trends', roles: ['manager'] },
   { href: '/rubric', label: 'Rubric', roles: ['manager'] },
   { href: '/admin/users', label: 'Users', roles: ['admin'] },
+  { href: '/mailbox', label: 'Mailbox', roles: ['admin'] },
 ];
 
 const HOME: Record<Role, string> = {

@@ -13,6 +13,8 @@ import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
 import { DueText } from './due-text';
 import { RecordView } from './record-view';
+import { ReworkChecklist } from '@/components/rework/rework-checklist';
+import { Timeline } from '@/components/rework/timeline';
 import { StatusBadge } from './status-badge';
 
 export function JobScreen({ id }: { id: number }) {
@@ -38,11 +40,9 @@ export function JobScreen({ id }: { id: number }) {
         <Text variant="small">{`Site visit ${formatDate(job.siteVisitDate)} · Technician ${job.technician.name}`}</Text>
       </View>
 
+      {job.status === 'rework_requested' || (latest !== null && latest > 1) ? <ReworkChecklist jobId={job.id} editable={canEdit} /> : null}
       {canEdit ? (
-        <>
-          {job.status === 'rework_requested' ? <Notice tone="caution">Rework was requested. Correct the record and submit the next revision.</Notice> : null}
-          <CaptureRecordForm key={query.data.recordVersion} detail={query.data} />
-        </>
+        <CaptureRecordForm key={query.data.recordVersion} detail={query.data} />
       ) : (
         <View style={{ gap: space.md }}>
           {latest === null ? (
@@ -69,6 +69,7 @@ export function JobScreen({ id }: { id: number }) {
           <FilesSection jobId={job.id} files={query.data.files} editable={false} />
         </View>
       )}
+      <Timeline jobId={job.id} />
     </Screen>
   );
 }

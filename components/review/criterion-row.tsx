@@ -13,12 +13,14 @@ type Props = {
   applies: boolean;
   entry: CriterionEntry;
   current: boolean;
+  // Revision whose score this one still carries, until the reviewer changes it.
+  carriedFrom?: number | null;
   error?: string;
   onChange: (entry: CriterionEntry) => void;
   onFocus: () => void;
 };
 
-export function CriterionRow({ criterion, applies, entry, current, error, onChange, onFocus }: Props) {
+export function CriterionRow({ criterion, applies, entry, current, carriedFrom, error, onChange, onFocus }: Props) {
   const max = scaleMax(criterion.scale);
   const choices = criterion.scale.kind === 'levels'
     ? criterion.scale.levels.map((label, value) => ({ value, short: String(value), label: `${value}: ${label}` }))
@@ -56,6 +58,7 @@ export function CriterionRow({ criterion, applies, entry, current, error, onChan
               );
             })}
           </View>
+          {carriedFrom ? <Text variant="small" style={{ color: colors.rework }}>{`Carried over from revision ${carriedFrom}: its inputs did not change. Confirm or change it.`}</Text> : null}
           {entry.score !== undefined && entry.score !== null && criterion.scale.kind === 'levels' ? (
             <Text variant="small">{`${entry.score} of ${max}: ${criterion.scale.levels[entry.score]}`}</Text>
           ) : null}

@@ -18,6 +18,7 @@ import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 import { queueColumns } from './queue-columns';
 import { QueueFilters } from './queue-filters';
+import { DisputesPanel } from '@/components/rework/disputes-panel';
 import { ReassignPanel } from './reassign-panel';
 import { SecondReviewList } from './second-review-list';
 
@@ -104,6 +105,7 @@ export function QueueScreen() {
         </View>
       ) : null}
       {isReviewer ? <SecondReviewList /> : null}
+      {me?.role === 'manager' ? <DisputesPanel /> : null}
       {me?.role === 'manager' ? <ReassignPanel /> : null}
       <HelpOverlay visible={help} title="Queue keys" keys={KEYS} onClose={() => setHelp(false)} />
     </Screen>

@@ -15,6 +15,7 @@ import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { CriterionRow, type CriterionEntry } from './criterion-row';
+import { ChangesPanel } from './changes-panel';
 import { RevisionPanel } from './revision-panel';
 import { ScoreSummary } from './score-summary';
 
@@ -31,8 +32,13 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
   const { data: me } = useSessionQuery();
   const { rubric, applicable, job } = workspace;
   const second = workspace.secondReviewId;
+  const carried = workspace.previous?.carried ?? {};
+  // Criteria whose inputs did not change start from the last review's score, marked so.
   const [entries, setEntries] = useState<Record<string, CriterionEntry>>(() =>
-    Object.fromEntries(rubric.criteria.map((c) => [c.key, { score: applicable[c.key] ? undefined : null, stockReason: null, comment: '' }])),
+    Object.fromEntries(rubric.criteria.map((c) => {
+      const from = applicable[c.key] ? carried[c.key] : undefined;
+      return [c.key, from ? { score: from.score ?? undefined, stockReason: from.stockReason, comment: from.comment } : { score: applicable[c.key] ? undefined : null, stockReason: null, comment: '' }];
+    })),
   );
   const [current, setCurrent] = useState(0);
   const [decision, setDecision] = useState<Decision | undefined>();
@@ -92,6 +98,7 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
           criterion={criterion}
           applies={applicable[criterion.key]}
           entry={entries[criterion.key]}
+          carriedFrom={criterion.key in carried && entries[criterion.key].score === carried[criterion.key].score ? workspace.previous!.revision : null}
           current={index === current}
           error={fieldErrors[`scores.${criterion.key}`] ?? fieldErrors[`scores.${criterion.key}.comment`]}
           onFocus={() => setCurrent(index)}
@@ -121,7 +128,10 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
         </View>
       ) : null}
       <View style={[styles.columns, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
-        <View style={wide ? { flex: 1 } : undefined}><RevisionPanel revision={workspace.revision} /></View>
+        <View style={[{ gap: space.md }, wide ? { flex: 1 } : undefined]}>
+          {workspace.previous ? <ChangesPanel previous={workspace.previous} currentRevision={workspace.revision.number} /> : null}
+          <RevisionPanel revision={workspace.revision} />
+        </View>
         <View style={wide ? { flex: 1 } : undefined}>{holdsClaim ? rubricColumn : null}</View>
       </View>
       <HelpOverlay visible={help} title="Scoring keys" keys={KEYS} onClose={() => setHelp(false)} />

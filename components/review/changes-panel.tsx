@@ -1,0 +1,41 @@
+import { StyleSheet, View } from 'react-native';
+import { REWORK_RESPONSE_LABELS, type Workspace } from '@/shared/review';
+import { Badge } from '@/components/ui/badge';
+import { Text } from '@/components/ui/text';
+import { colors, fonts, space } from '@/components/ui/theme';
+
+const KIND_WORD = { added: 'Added', removed: 'Removed', changed: 'Changed' } as const;
+
+// For a resubmission: the technician's answers and what changed since the reviewed revision.
+export function ChangesPanel({ previous, currentRevision }: { previous: NonNullable<Workspace['previous']>; currentRevision: number }) {
+  return (
+    <View style={styles.card} role="region" aria-label="Changes since the last review">
+      <Text variant="heading" role="heading" aria-level={2}>{`Resubmission: revision ${previous.revision} → ${currentRevision}`}</Text>
+      <Text variant="muted">{`Revision ${previous.revision} scored ${previous.score ?? '–'}.`}</Text>
+      {previous.items.length ? <Text variant="label">Technician's answers</Text> : null}
+      {previous.items.map((item) => (
+        <View key={item.id} style={styles.item}>
+          <View style={styles.head}>
+            <Text style={{ fontFamily: fonts.semibold, flexShrink: 1 }}>{item.title}</Text>
+            <Badge label={item.response ? REWORK_RESPONSE_LABELS[item.response] : 'Not answered'} tone={item.response === 'fixed' ? 'pass' : item.response ? 'rework' : 'fail'} />
+          </View>
+          <Text variant="small">{`Asked: ${item.instruction}`}</Text>
+          {item.responseNote ? <Text variant="small">{`Answer: ${item.responseNote}`}</Text> : null}
+        </View>
+      ))}
+      <Text variant="label">{`What changed (${previous.changes.length})`}</Text>
+      {previous.changes.length === 0 ? <Text variant="muted">Nothing in the record changed.</Text> : null}
+      {previous.changes.map((change) => (
+        <Text key={`${change.path}-${change.kind}`} variant="small">
+          {`${KIND_WORD[change.kind]} ${change.path}: ${change.before} → ${change.after}`}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.accent, borderRadius: 8, padding: space.lg, gap: space.sm },
+  item: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, padding: space.sm, gap: 2 },
+  head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.sm },
+});

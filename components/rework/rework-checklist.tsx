@@ -1,0 +1,59 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { REWORK_RESPONSE_LABELS, REWORK_RESPONSES, type ReworkItemView, type ReworkResponse } from '@/shared/review';
+import { ApiError } from '@/components/lib/api-client';
+import { useReworkAnswerMutation, useReworkItemsQuery } from '@/components/queries/rework';
+import { Badge } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
+import { ChoiceField } from '@/components/ui/choice-field';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { colors, space } from '@/components/ui/theme';
+
+// The reviewer's failing items, each answered by the technician before resubmitting.
+export function ReworkChecklist({ jobId, editable }: { jobId: number; editable: boolean }) {
+  const items = useReworkItemsQuery(jobId);
+  if (!items.data?.length) return null;
+  const open = items.data.filter((i) => !i.response).length;
+  return (
+    <View style={styles.box} role="region" aria-label="Rework requested">
+      <Text variant="heading" role="heading" aria-level={2}>Rework requested</Text>
+      <Text variant="muted">{open ? `${open} of ${items.data.length} item(s) still need your answer before you can resubmit.` : 'Every item is answered. Correct the record below and submit the next revision.'}</Text>
+      {items.data.map((item, i) => <ReworkItemCard key={item.id} jobId={jobId} item={item} index={i} editable={editable} />)}
+    </View>
+  );
+}
+
+function ReworkItemCard({ jobId, item, index, editable }: { jobId: number; item: ReworkItemView; index: number; editable: boolean }) {
+  const answer = useReworkAnswerMutation(jobId);
+  const [response, setResponse] = useState<ReworkResponse | undefined>(item.response ?? undefined);
+  const [note, setNote] = useState(item.responseNote ?? '');
+  const fieldError = answer.error instanceof ApiError ? answer.error.fields.note ?? answer.error.message : undefined;
+  return (
+    <View style={styles.item} role="group" aria-label={`Rework item ${index + 1}: ${item.title}`}>
+      <View style={styles.head}>
+        <Text variant="label">{`${index + 1}. ${item.title}`}</Text>
+        <Badge label={item.response ? `Answered: ${REWORK_RESPONSE_LABELS[item.response]}` : 'Open'} tone={item.response ? 'pass' : 'rework'} />
+      </View>
+      {item.stockReason ? <Text variant="muted">{item.stockReason}</Text> : null}
+      <Text>{item.instruction}</Text>
+      {item.disputeOutcome ? <Text variant="small">{`Manager: dispute ${item.disputeOutcome}${item.disputeNote ? ` (${item.disputeNote})` : ''}`}</Text> : null}
+      {editable ? (
+        <>
+          <ChoiceField<ReworkResponse> label={`Your answer to item ${index + 1}`} options={REWORK_RESPONSES.map((r) => ({ value: r, label: REWORK_RESPONSE_LABELS[r] }))} value={response} onChange={setResponse} />
+          <TextField label={`What you did, or why (item ${index + 1})`} value={note} onChangeText={setNote} multiline error={fieldError} />
+          <Button label={`Save answer ${index + 1}`} tone="secondary" disabled={!response} busy={answer.isPending}
+            onPress={() => response && answer.mutate({ itemId: item.id, response, note })} />
+        </>
+      ) : item.responseNote ? (
+        <Text variant="small">{`Technician: ${item.responseNote}`}</Text>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  box: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.rework, borderLeftWidth: 6, borderRadius: 8, padding: space.lg, gap: space.md },
+  item: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, padding: space.md, gap: space.sm },
+  head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
+});
