@@ -1,77 +1,102 @@
-import { QueryTypes, type QueryInterface } from 'sequelize';
+import { QueryTypes, type QueryInterface, type Transaction } from 'sequelize';
+import { DEFAULT_RUBRIC } from '../shared/default-rubric';
 import { DEMO_PEOPLE } from './data/demo-people';
-import { demoJobs } from './data/demo-jobs';
+import { demoJobs, type DemoJob } from './data/demo-jobs';
 
-// Re-runnable: rows are keyed by claim reference (jobs), job (drafts) and job + number
-// (revisions), and inserted with INSERT IGNORE, so a second run adds nothing.
+// Re-runnable: jobs are keyed by claim reference and inserted with INSERT IGNORE; a job's
+// revisions, reviews and timeline are written only when the job row was new.
 export async function up(queryInterface: QueryInterface) {
   const db = queryInterface.sequelize;
-  const technicians = DEMO_PEOPLE.filter((p) => p.role === 'technician');
   const users = await db.query<{ id: number; email: string }>('SELECT id, email FROM users WHERE email IN (:emails)', {
     replacements: { emails: DEMO_PEOPLE.map((p) => p.email) },
     type: QueryTypes.SELECT,
   });
   const idOf = new Map(users.map((u) => [u.email, u.id]));
-  const manager = DEMO_PEOPLE.find((p) => p.role === 'manager')!;
+  const technicians = DEMO_PEOPLE.filter((p) => p.role === 'technician').map((p) => idOf.get(p.email)!);
+  const reviewers = DEMO_PEOPLE.filter((p) => p.role === 'reviewer').map((p) => idOf.get(p.email)!);
+  const managerId = idOf.get(DEMO_PEOPLE.find((p) => p.role === 'manager')!.email)!;
+  const [rubric] = await db.query<{ id: number }>('SELECT id FROM rubrics ORDER BY version ASC LIMIT 1', { type: QueryTypes.SELECT });
   const now = new Date();
   const jobs = demoJobs(now);
 
-  await queryInterface.bulkInsert(
-    'jobs',
-    jobs.map((j) => ({
-      claim_reference: j.claimReference,
-      street: j.street,
-      city: j.city,
-      postcode: j.postcode,
-      property_type: j.propertyType,
-      loss_type: j.lossType,
-      loss_date: j.lossDate,
-      site_visit_date: j.siteVisitDate,
-      due_at: j.dueAt,
-      effective_due_at: j.dueAt,
-      current_revision: j.revisions.length,
-      submitted_at: j.revisions.at(-1)?.submittedAt ?? null,
-      camera_class: j.revisions.at(-1)?.record.cameraClass ?? null,
-      priority: j.priority,
-      status: j.status,
-      technician_id: idOf.get(technicians[j.technicianIndex].email),
-      created_by_id: idOf.get(manager.email),
-      created_at: new Date(new Date(j.lossDate).getTime() + 86_400_000),
-      updated_at: now,
-    })),
-    { ignoreDuplicates: true } as object,
-  );
-
-  const rows = await db.query<{ id: number; claim_reference: string }>('SELECT id, claim_reference FROM jobs WHERE claim_reference IN (:refs)', {
+  const existing = await db.query<{ claim_reference: string }>('SELECT claim_reference FROM jobs WHERE claim_reference IN (:refs)', {
     replacements: { refs: jobs.map((j) => j.claimReference) },
     type: QueryTypes.SELECT,
   });
-  const jobId = new Map(rows.map((r) => [r.claim_reference, r.id]));
+  const known = new Set(existing.map((r) => r.claim_reference));
+  const fresh = jobs.filter((j) => !known.has(j.claimReference));
+  if (fresh.length === 0) return;
 
-  await queryInterface.bulkInsert(
-    'capture_drafts',
-    jobs.map((j) => ({ job_id: jobId.get(j.claimReference), data: JSON.stringify(j.draft), version: 1, created_at: now, updated_at: now })),
-    { ignoreDuplicates: true } as object,
-  );
+  await db.transaction(async (transaction) => {
+    for (const job of fresh) await insertJob(queryInterface, transaction, job, { technicians, reviewers, managerId, rubricId: rubric.id, now });
+  });
+}
 
-  const revisions = jobs.flatMap((j) =>
-    j.revisions.map((r, n) => ({
-      job_id: jobId.get(j.claimReference),
-      number: n + 1,
-      data: JSON.stringify(r.record),
-      files: '[]',
-      findings: JSON.stringify({ missing: [], warnings: [] }),
-      submitted_by_id: idOf.get(technicians[j.technicianIndex].email),
-      submitted_at: r.submittedAt,
-    })),
-  );
-  if (revisions.length) await queryInterface.bulkInsert('capture_revisions', revisions, { ignoreDuplicates: true } as object);
+type Ids = { technicians: number[]; reviewers: number[]; managerId: number; rubricId: number; now: Date };
+
+async function insertJob(queryInterface: QueryInterface, transaction: Transaction, job: DemoJob, ids: Ids) {
+  const db = queryInterface.sequelize;
+  const technicianId = ids.technicians[job.technicianIndex];
+  const latest = job.revisions.at(-1);
+  const created = new Date(new Date(`${job.lossDate}T09:00:00Z`).getTime() + 86_400_000);
+  await queryInterface.bulkInsert('jobs', [{
+    claim_reference: job.claimReference, street: job.street, city: job.city, postcode: job.postcode,
+    property_type: job.propertyType, loss_type: job.lossType, loss_date: job.lossDate, site_visit_date: job.siteVisitDate,
+    due_at: job.dueAt, effective_due_at: new Date(job.dueAt.getTime() + job.pausedMs), paused_at: job.pausedAt, paused_ms: job.pausedMs,
+    current_revision: job.revisions.length, submitted_at: latest?.submittedAt ?? null, camera_class: latest?.record.cameraClass ?? null,
+    priority: job.priority, status: job.status, technician_id: technicianId, created_by_id: ids.managerId,
+    created_at: created, updated_at: ids.now,
+  }], { transaction });
+  const [{ id: jobId }] = await db.query<{ id: number }>('SELECT id FROM jobs WHERE claim_reference = ?', { replacements: [job.claimReference], type: QueryTypes.SELECT, transaction });
+
+  const events: object[] = [
+    { job_id: jobId, actor_id: ids.managerId, type: 'created', data: JSON.stringify({ claimReference: job.claimReference }), created_at: created },
+    { job_id: jobId, actor_id: ids.managerId, type: 'assigned', data: JSON.stringify({ technicianId }), created_at: created },
+  ];
+  await queryInterface.bulkInsert('capture_drafts', [{ job_id: jobId, data: JSON.stringify(job.draft), version: 1, created_at: created, updated_at: ids.now }], { transaction });
+  for (const [n, revision] of job.revisions.entries()) {
+    await queryInterface.bulkInsert('capture_revisions', [{
+      job_id: jobId, number: n + 1, data: JSON.stringify(revision.record), files: '[]',
+      findings: JSON.stringify({ missing: [], warnings: [] }), submitted_by_id: technicianId, submitted_at: revision.submittedAt,
+    }], { transaction });
+    events.push({ job_id: jobId, actor_id: technicianId, type: 'submitted', data: JSON.stringify({ revision: n + 1, warnings: 0 }), created_at: revision.submittedAt });
+  }
+
+  let firstAcceptedId: number | null = null;
+  for (const review of job.reviews) {
+    const reviewerId = ids.reviewers[review.reviewerIndex];
+    await queryInterface.bulkInsert('reviews', [{
+      job_id: jobId, revision_number: review.revision, reviewer_id: reviewerId, rubric_id: ids.rubricId, kind: review.kind,
+      score: review.score, passed: review.passed, decision: review.decision, claimed_at: review.claimedAt, decided_at: review.decidedAt, due_at: job.dueAt,
+    }], { transaction });
+    const [{ id: reviewId }] = await db.query<{ id: number }>('SELECT LAST_INSERT_ID() AS id', { type: QueryTypes.SELECT, transaction });
+    await queryInterface.bulkInsert('review_scores', review.scores.map((s) => ({
+      review_id: reviewId, criterion_key: s.key, score: s.score, max_score: s.maxScore, stock_reason: s.stockReason, comment: s.comment, carried_over: false,
+    })), { transaction });
+    if (review.kind === 'primary') {
+      events.push({ job_id: jobId, actor_id: reviewerId, type: 'reviewed', data: JSON.stringify({ decision: review.decision, score: review.score, passed: review.passed, rubricVersion: 1, revision: review.revision }), created_at: review.decidedAt });
+      if (review.decision === 'accept') firstAcceptedId = reviewId;
+      if (review.decision === 'rework') {
+        const failing = review.scores.filter((s) => s.score !== null && s.score < s.maxScore);
+        const answered = job.revisions.length > review.revision;
+        await queryInterface.bulkInsert('rework_items', failing.map((s) => ({
+          review_id: reviewId, job_id: jobId, criterion_key: s.key, title: DEFAULT_RUBRIC.criteria.find((c) => c.key === s.key)!.title,
+          instruction: s.comment ?? '', stock_reason: s.stockReason, response: answered ? 'fixed' : null,
+          response_note: answered ? 'Corrected on the next revision (demo).' : null, responded_at: answered ? job.revisions[review.revision].submittedAt : null,
+        })), { transaction });
+      }
+    } else if (firstAcceptedId !== null) {
+      const firstReviewerIndex = (review.reviewerIndex + 2) % 3;
+      await queryInterface.bulkInsert('second_reviews', [{
+        job_id: jobId, revision_number: review.revision, first_review_id: firstAcceptedId, first_reviewer_id: ids.reviewers[firstReviewerIndex],
+        second_review_id: reviewId, created_at: review.decidedAt,
+      }], { transaction });
+    }
+  }
+  await queryInterface.bulkInsert('audit_events', events, { transaction });
 }
 
 export async function down(queryInterface: QueryInterface) {
   const refs = demoJobs().map((j) => j.claimReference);
-  await queryInterface.sequelize.query(
-    'DELETE FROM jobs WHERE claim_reference IN (:refs)',
-    { replacements: { refs }, type: QueryTypes.DELETE },
-  );
+  await queryInterface.sequelize.query('DELETE FROM jobs WHERE claim_reference IN (:refs)', { replacements: { refs }, type: QueryTypes.DELETE });
 }

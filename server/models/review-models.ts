@@ -67,6 +67,7 @@ export class ReviewScore extends Model<InferAttributes<ReviewScore>, InferCreati
   declare reviewId: number;
   declare criterionKey: string;
   declare score: number | null;
+  declare maxScore: number;
   declare stockReason: string | null;
   declare comment: string | null;
   declare carriedOver: boolean;
@@ -77,6 +78,7 @@ export class ReviewScore extends Model<InferAttributes<ReviewScore>, InferCreati
         reviewId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
         criterionKey: { type: DataTypes.STRING(40), primaryKey: true },
         score: { type: DataTypes.TINYINT.UNSIGNED, allowNull: true },
+        maxScore: { type: DataTypes.TINYINT.UNSIGNED, allowNull: false, defaultValue: 4 },
         stockReason: { type: DataTypes.STRING(120), allowNull: true },
         comment: { type: DataTypes.TEXT, allowNull: true },
         carriedOver: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

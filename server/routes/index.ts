@@ -10,6 +10,7 @@ import { reviewsRouter } from './reviews';
 import { rubricsRouter } from './rubrics';
 import { sessionRouter } from './session';
 import { techniciansRouter } from './technicians';
+import { trendsRouter } from './trends';
 import { usersRouter } from './users';
 
 // Every API router and where it is mounted. The route-access test walks this list, so a
@@ -27,4 +28,5 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api', router: reviewsRouter },
   { prefix: '/api', router: reworkRouter },
   { prefix: '/api/mailbox', router: mailboxRouter },
+  { prefix: '/api/trends', router: trendsRouter },
 ];

@@ -165,7 +165,7 @@ async function saveScores(reviewId: number, criteria: Criterion[], scores: Score
       const score = s?.score ?? null;
       // Marked carried over when the reviewer kept the score offered from the last review.
       const carriedOver = c.key in carried && carried[c.key] === score;
-      return { reviewId, criterionKey: c.key, score, stockReason: s?.stockReason || null, comment: s?.comment.trim() || null, carriedOver };
+      return { reviewId, criterionKey: c.key, score, maxScore: scaleMax(c.scale), stockReason: s?.stockReason || null, comment: s?.comment.trim() || null, carriedOver };
     }),
     { transaction },
   );

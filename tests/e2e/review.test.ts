@@ -16,8 +16,8 @@ let technicianId: number;
 
 beforeAll(async () => {
   browser = await launchBrowser(DESKTOP);
-  // Due within the hour and hail, so it sorts first among this technician's hail jobs.
-  jobId = await submittedJob(browser.request, { technician: 'jonah.', claimReference, dueInHours: 1, record: completeRecord(), lossType: 'hail' });
+  // Long overdue and hail, so it sorts first among this technician's hail jobs (overdue first, earliest due first).
+  jobId = await submittedJob(browser.request, { technician: 'jonah.', claimReference, dueInHours: -2000, record: completeRecord(), lossType: 'hail' });
   technicianId = await as(browser.request, 'mara.', async () => {
     const { technicians } = await call<{ technicians: { id: number; name: string }[] }>(browser.request, 'get', '/api/technicians');
     return technicians.find((t) => t.name === demoPerson('jonah.').name)!.id;

@@ -161,6 +161,10 @@ const ROUTES: Record<string, RouteCase> = {
   },
   'GET /api/jobs/:id/timeline': { allowed: [...ROLES], prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/timeline` }) },
   'GET /api/mailbox': { allowed: ['admin'] },
+  'GET /api/trends': { allowed: ['technician', 'manager'] },
+  'GET /api/trends/team': { allowed: ['manager'] },
+  'GET /api/trends/reviewers': { allowed: ['manager'] },
+  'GET /api/trends/calibration': { allowed: ['manager'] },
 };
 
 // A job the signed-in technician owns (anyone else's job for the other roles).
