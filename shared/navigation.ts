@@ -6,6 +6,7 @@ export type NavItem = { href: string; label: string; roles: Role[] };
 
 export const NAV_ITEMS: NavItem[] = [
   { href: '/jobs', label: 'My jobs', roles: ['technician'] },
+  { href: '/trends/mine', label: 'My quality', roles: ['technician'] },
   { href: '/jobs', label: 'Jobs', roles: ['manager', 'admin'] },
   { href: '/queue', label: 'Queue', roles: ['reviewer', 'manager'] },
   { href: '/trends', label: 'Trends', roles: ['manager'] },

@@ -15,10 +15,11 @@ import { StatusFilter } from './status-filter';
 export function JobsScreen() {
   const { data: user } = useSessionQuery();
   const router = useRouter();
-  const params = useLocalSearchParams<{ status?: string }>();
+  const params = useLocalSearchParams<{ status?: string; technicianId?: string }>();
   // The filter lives in the URL so a reload or a shared link keeps it.
   const status = (JOB_STATUSES as readonly string[]).includes(params.status ?? '') ? (params.status as JobStatus) : null;
-  const jobs = useJobsQuery({ status: status ? [status] : undefined });
+  const technicianId = /^\d+$/.test(params.technicianId ?? '') ? Number(params.technicianId) : undefined;
+  const jobs = useJobsQuery({ status: status ? [status] : undefined, technicianId });
   const isTechnician = user?.role === 'technician';
 
   return (

@@ -7,7 +7,7 @@ import { api } from '@/components/lib/api-client';
 
 export const jobKeys = {
   root: ['jobs'] as const,
-  list: (filters: { status?: JobStatus[] }) => [...jobKeys.root, 'list', filters] as const,
+  list: (filters: { status?: JobStatus[]; technicianId?: number }) => [...jobKeys.root, 'list', filters] as const,
   detail: (id: number) => [...jobKeys.root, 'detail', id] as const,
   revision: (id: number, n: number) => [...jobKeys.root, 'detail', id, 'revision', n] as const,
   technicians: ['technicians'] as const,
@@ -23,8 +23,9 @@ export type JobDetail = {
 
 export type Revision = { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult };
 
-export function useJobsQuery(filters: { status?: JobStatus[] }) {
-  const search = filters.status?.length ? `?status=${filters.status.join(',')}` : '';
+export function useJobsQuery(filters: { status?: JobStatus[]; technicianId?: number }) {
+  const parts = [filters.status?.length ? `status=${filters.status.join(',')}` : '', filters.technicianId ? `technicianId=${filters.technicianId}` : ''].filter(Boolean);
+  const search = parts.length ? `?${parts.join('&')}` : '';
   return useQuery({
     queryKey: jobKeys.list(filters),
     queryFn: async () => (await api.get<{ jobs: JobSummary[] }>(`/api/jobs${search}`)).jobs,

@@ -48,7 +48,7 @@ export function ChoiceField<T extends string>({ label, options, value, onChange,
 }
 
 const styles = StyleSheet.create({
-  field: { gap: space.xs },
+  field: { gap: space.xs, flexShrink: 1, maxWidth: '100%' },
   options: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   option: {
     minHeight: 40,

@@ -15,6 +15,6 @@ describe('role navigation', () => {
 
   it('keeps the user admin page away from everyone but admins', () => {
     expect(ROLES.filter((role) => canOpen(role, '/admin/users'))).toEqual(['admin']);
-    expect(navFor('technician').map((i) => i.label)).toEqual(['My jobs']);
+    expect(navFor('technician').map((i) => i.label)).toEqual(['My jobs', 'My quality']);
   });
 });

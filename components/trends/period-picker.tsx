@@ -1,0 +1,38 @@
+import { StyleSheet, View } from 'react-native';
+import { useRubricsQuery } from '@/components/queries/reviews';
+import type { Period } from '@/components/queries/trends';
+import { ChoiceField } from '@/components/ui/choice-field';
+import { Select } from '@/components/ui/select';
+import { space } from '@/components/ui/theme';
+
+const SPANS = [
+  { value: '4', label: 'Last 4 weeks' },
+  { value: '12', label: 'Last 12 weeks' },
+  { value: '26', label: 'Last 26 weeks' },
+];
+
+export function periodFor(weeks: number): Period {
+  const to = new Date();
+  const from = new Date(to.getTime() - weeks * 7 * 86_400_000);
+  return { from: from.toISOString().slice(0, 10), to: to.toISOString().slice(0, 10) };
+}
+
+export function PeriodPicker({ weeks, rubricVersion, onChange, showRubric = true }: {
+  weeks: string;
+  rubricVersion: string;
+  onChange: (changes: { weeks?: string; rubricVersion?: string }) => void;
+  showRubric?: boolean;
+}) {
+  const rubrics = useRubricsQuery();
+  return (
+    <View style={styles.row}>
+      <ChoiceField<string> label="Period" options={SPANS} value={weeks} onChange={(w) => onChange({ weeks: w })} />
+      {showRubric ? (
+        <Select label="Rubric version" value={rubricVersion} allLabel="All versions"
+          options={(rubrics.data ?? []).map((r) => ({ value: String(r.version), label: `Version ${r.version}` }))} onChange={(v) => onChange({ rubricVersion: v })} />
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({ row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.lg, alignItems: 'flex-end' } });
