@@ -5,6 +5,7 @@ import type { JobStatus, LossType, Priority, PropertyType } from './jobs';
 import type { CheckResult } from './pre-submit-checks';
 import type { Rubric } from './rubric';
 import type { Change } from './revision-diff';
+import type { StationAnalysis } from './station-analysis';
 
 export const DECISIONS = ['accept', 'rework', 'recapture'] as const;
 export type Decision = (typeof DECISIONS)[number];
@@ -57,7 +58,7 @@ export type ScoreInput = { key: string; score: number | null; stockReason: strin
 
 export type Workspace = {
   job: QueueRow & { street: string; city: string };
-  revision: { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult };
+  revision: { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult; stationAnalysis: StationAnalysis | null };
   rubric: Rubric;
   applicable: Record<string, boolean>;
   claimExpiresAt: string | null;

@@ -66,6 +66,14 @@ export const config = {
     // Share of accepted first reviews drawn for a blind second review (calibration).
     secondReviewShare: number('SECOND_REVIEW_SHARE', 0.1),
   },
+  // Maximum spacing between stations per camera class, in metres. Defaults are common practice
+  // (no published source): 6 ft for a tripod depth camera, 5 ft for a 360 camera.
+  stationSpacingM: {
+    tripod_depth: number('SPACING_TRIPOD_DEPTH_M', 6 * 0.3048),
+    camera_360: number('SPACING_CAMERA_360_M', 5 * 0.3048),
+    handheld_lidar: env.SPACING_HANDHELD_LIDAR_M ? number('SPACING_HANDHELD_LIDAR_M', 0) : null,
+    laser_scanner: number('SPACING_LASER_SCANNER_M', 10),
+  } as Record<'tripod_depth' | 'camera_360' | 'handheld_lidar' | 'laser_scanner', number | null>,
   uploadMaxBytes: number('UPLOAD_MAX_MB', 25) * 1024 * 1024,
   instanceId: env.INSTANCE_ID ?? crypto.randomUUID(),
 };

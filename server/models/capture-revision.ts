@@ -2,6 +2,7 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import type { CaptureRecord } from '../../shared/capture-record';
 import type { StoredFile } from '../../shared/files';
 import type { CheckResult } from '../../shared/pre-submit-checks';
+import type { StationAnalysis } from '../../shared/station-analysis';
 import { parseJson } from './capture-draft';
 
 // Immutable once written (a database trigger refuses updates).
@@ -12,6 +13,7 @@ export class CaptureRevision extends Model<InferAttributes<CaptureRevision>, Inf
   declare data: CaptureRecord;
   declare files: StoredFile[];
   declare findings: CheckResult;
+  declare stationAnalysis: CreationOptional<StationAnalysis | null>;
   declare submittedById: number;
   declare submittedAt: Date;
 
@@ -24,6 +26,7 @@ export class CaptureRevision extends Model<InferAttributes<CaptureRevision>, Inf
         data: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('data')); } },
         files: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('files')); } },
         findings: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('findings')); } },
+        stationAnalysis: { type: DataTypes.JSON, allowNull: true, get() { const v = this.getDataValue('stationAnalysis'); return v === null || v === undefined ? null : parseJson(v); } },
         submittedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         submittedAt: { type: DataTypes.DATE(3), allowNull: false },
       },

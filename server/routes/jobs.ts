@@ -12,6 +12,7 @@ import { captureRecordRules } from '../validators/capture-record';
 import { jobCreateRules, jobUpdateRules } from '../validators/job';
 import { getRevision, saveDraft, submitRecord } from '../services/capture-record-service';
 import { detachFile, uploadFile } from '../services/files-service';
+import { stationAnalysisFor } from '../services/station-service';
 import { createJob, getJobDetail, listJobs, updateJob } from '../services/jobs-service';
 
 export const jobsRouter = Router();
@@ -87,6 +88,16 @@ jobsRouter.post(
   ),
   async (req, res) => {
     res.status(201).json({ file: await uploadFile(req.user!, Number(req.params.id), req.body.kind as FileKind, req.file!) });
+  },
+);
+
+// The station-layout analysis: of a submitted revision, or (no revision) of the working record.
+jobsRouter.get(
+  '/:id/station-analysis',
+  anyJobReader,
+  validate(jobId, query('revision', 'Must be a revision number').optional().isInt({ min: 1 }).toInt()),
+  async (req, res) => {
+    res.json(await stationAnalysisFor(req.user!, Number(req.params.id), req.query.revision ? Number(req.query.revision) : null));
   },
 );
 

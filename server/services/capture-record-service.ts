@@ -7,6 +7,7 @@ import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models'
 import { recordEvent } from './audit-service';
 import { resumeDueClock } from './due-clock';
 import { assertReworkAnswered } from './rework-service';
+import { analyseAttachedFile } from './station-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 
 type Actor = Express.User;
@@ -62,11 +63,12 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     await assertPhotosBelongToJob(jobId, record, transaction);
 
     const files = await StoredFile.findAll({ where: { jobId, detachedAt: null }, order: [['id', 'ASC']], transaction });
+    const stationAnalysis = await analyseAttachedFile(jobId, record, transaction);
     const previous = (await CaptureRevision.max('number', { where: { jobId }, transaction })) as number | null;
     const number = (previous ?? 0) + 1;
     const submittedAt = new Date();
     await CaptureRevision.create(
-      { jobId, number, data: record, files: files.map((f) => f.toView()), findings, submittedById: actor.id, submittedAt },
+      { jobId, number, data: record, files: files.map((f) => f.toView()), findings, stationAnalysis, submittedById: actor.id, submittedAt },
       { transaction },
     );
     await CaptureDraft.upsert({ jobId, data: record }, { transaction });
@@ -91,5 +93,6 @@ export async function getRevision(actor: Actor, jobId: number, number: number) {
     record: revision.data,
     files: revision.files,
     findings: revision.findings,
+    stationAnalysis: revision.stationAnalysis,
   };
 }

@@ -5,6 +5,7 @@ import { HttpError, invalid, notFound } from '../errors';
 import { StoredFile } from '../models';
 import { deleteObject, getObjectStream, putObject } from '../storage/s3';
 import { assertAssignedTechnician, findJobFor } from './job-access';
+import { assertValidStationFile } from './station-service';
 
 type Actor = Express.User;
 
@@ -29,6 +30,7 @@ export async function uploadFile(actor: Actor, jobId: number, kind: FileKind, up
   if (!contentType || !ACCEPTED_TYPES[kind].includes(contentType)) {
     throw invalid({ file: `A ${FILE_KIND_LABELS[kind].toLowerCase()} must be ${ACCEPTED_DESCRIPTION[kind]}; this file's content is ${contentType ?? 'not a recognised type'}.` });
   }
+  if (kind === 'station_coordinates') assertValidStationFile(upload.buffer);
   const sha256 = crypto.createHash('sha256').update(upload.buffer).digest('hex');
   const storageKey = `jobs/${jobId}/${crypto.randomUUID()}`;
   await putObject(storageKey, upload.buffer, contentType, sha256);

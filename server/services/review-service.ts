@@ -79,7 +79,7 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
   }
   return {
     job: { ...toQueueRow(job), street: job.street, city: job.city },
-    revision: { number: revision.number, submittedAt: revision.submittedAt.toISOString(), record: revision.data, files: revision.files, findings: revision.findings },
+    revision: { number: revision.number, submittedAt: revision.submittedAt.toISOString(), record: revision.data, files: revision.files, findings: revision.findings, stationAnalysis: revision.stationAnalysis },
     rubric: toRubricView(rubric),
     applicable: applicability(rubric.criteria, revision.data),
     claimExpiresAt: job.claimExpiresAt ? job.claimExpiresAt.toISOString() : null,

@@ -165,6 +165,7 @@ const ROUTES: Record<string, RouteCase> = {
   'GET /api/trends/team': { allowed: ['manager'] },
   'GET /api/trends/reviewers': { allowed: ['manager'] },
   'GET /api/trends/calibration': { allowed: ['manager'] },
+  'GET /api/jobs/:id/station-analysis': { allowed: [...ROLES], prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/station-analysis` }) },
 };
 
 // A job the signed-in technician owns (anyone else's job for the other roles).
