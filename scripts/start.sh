@@ -18,8 +18,9 @@ ensure_node_modules
 ensure_mariadb_installed
 start_mariadb
 create_database "$DB_NAME"
-migrate_and_seed
+# The fakes start first: the demo seed stores files in object storage.
 start_fakes
+migrate_and_seed
 build_web_if_stale
 
 node --import tsx server/index.ts &

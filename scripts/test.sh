@@ -32,9 +32,10 @@ start_mariadb
 db_root -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; DROP DATABASE IF EXISTS \`${DB_NAME}_migrations\`;"
 create_database "$DB_NAME"
 create_database "${DB_NAME}_migrations"
-migrate_and_seed
 rm -rf "$DATA_DIR/mail/$SMTP_PORT" "$DATA_DIR/s3/${S3_ENDPOINT##*:}"
+# The fakes start first: the demo seed stores files in object storage.
 start_fakes
+migrate_and_seed
 build_web_if_stale
 
 OUTBOX_INTERVAL_MS=1000 node --import tsx server/index.ts >"$DATA_DIR/log/test-server.log" 2>&1 &

@@ -1,7 +1,14 @@
 import { QueryTypes, type QueryInterface, type Transaction } from 'sequelize';
 import { DEFAULT_RUBRIC } from '../shared/default-rubric';
 import { DEMO_PEOPLE } from './data/demo-people';
+import crypto from 'node:crypto';
 import { demoJobs, type DemoJob } from './data/demo-jobs';
+import { demoStationCsv } from './data/demo-stations';
+import { analyseFor } from '../server/services/station-service';
+import { putObject } from '../server/storage/s3';
+
+// Demo jobs that carry a station coordinate file (by position in the demo list).
+const WITH_STATION_FILE = new Set([102, 108, 109, 114]);
 
 // Re-runnable: jobs are keyed by claim reference and inserted with INSERT IGNORE; a job's
 // revisions, reviews and timeline are written only when the job row was new.
@@ -28,13 +35,16 @@ export async function up(queryInterface: QueryInterface) {
   if (fresh.length === 0) return;
 
   await db.transaction(async (transaction) => {
-    for (const job of fresh) await insertJob(queryInterface, transaction, job, { technicians, reviewers, managerId, rubricId: rubric.id, now });
+    for (const job of fresh) {
+      const index = jobs.indexOf(job);
+      await insertJob(queryInterface, transaction, job, { technicians, reviewers, managerId, rubricId: rubric.id, now }, WITH_STATION_FILE.has(index) ? index : null);
+    }
   });
 }
 
 type Ids = { technicians: number[]; reviewers: number[]; managerId: number; rubricId: number; now: Date };
 
-async function insertJob(queryInterface: QueryInterface, transaction: Transaction, job: DemoJob, ids: Ids) {
+async function insertJob(queryInterface: QueryInterface, transaction: Transaction, job: DemoJob, ids: Ids, stationSeed: number | null) {
   const db = queryInterface.sequelize;
   const technicianId = ids.technicians[job.technicianIndex];
   const latest = job.revisions.at(-1);
@@ -54,10 +64,12 @@ async function insertJob(queryInterface: QueryInterface, transaction: Transactio
     { job_id: jobId, actor_id: ids.managerId, type: 'assigned', data: JSON.stringify({ technicianId }), created_at: created },
   ];
   await queryInterface.bulkInsert('capture_drafts', [{ job_id: jobId, data: JSON.stringify(job.draft), version: 1, created_at: created, updated_at: ids.now }], { transaction });
+  const stationFile = stationSeed === null ? null : await storeStationFile(queryInterface, transaction, jobId, technicianId, demoStationCsv(job.draft, stationSeed), created);
   for (const [n, revision] of job.revisions.entries()) {
     await queryInterface.bulkInsert('capture_revisions', [{
-      job_id: jobId, number: n + 1, data: JSON.stringify(revision.record), files: '[]',
+      job_id: jobId, number: n + 1, data: JSON.stringify(revision.record), files: JSON.stringify(stationFile ? [stationFile.view] : []),
       findings: JSON.stringify({ missing: [], warnings: [] }), submitted_by_id: technicianId, submitted_at: revision.submittedAt,
+      station_analysis: stationFile ? JSON.stringify(analyseFor(revision.record, stationFile.text)) : null,
     }], { transaction });
     events.push({ job_id: jobId, actor_id: technicianId, type: 'submitted', data: JSON.stringify({ revision: n + 1, warnings: 0 }), created_at: revision.submittedAt });
   }
@@ -94,6 +106,27 @@ async function insertJob(queryInterface: QueryInterface, transaction: Transactio
     }
   }
   await queryInterface.bulkInsert('audit_events', events, { transaction });
+}
+
+// Puts the demo station file in object storage and records it. Without storage (the fake S3
+// not running) the job simply has no station file.
+async function storeStationFile(queryInterface: QueryInterface, transaction: Transaction, jobId: number, technicianId: number, text: string, at: Date) {
+  const buffer = Buffer.from(text);
+  const sha256 = crypto.createHash('sha256').update(buffer).digest('hex');
+  const storageKey = `jobs/${jobId}/demo-stations-${sha256.slice(0, 12)}`;
+  try {
+    await putObject(storageKey, buffer, 'text/csv', sha256);
+  } catch {
+    console.warn(`demo station file for job ${jobId} not stored: object storage unreachable`);
+    return null;
+  }
+  await queryInterface.bulkInsert('files', [{
+    job_id: jobId, kind: 'station_coordinates', original_name: 'stations.csv', content_type: 'text/csv', size_bytes: buffer.length,
+    sha256, storage_key: storageKey, uploaded_by_id: technicianId, detached_at: null, created_at: at,
+  }], { transaction });
+  const [{ id }] = await queryInterface.sequelize.query<{ id: number }>('SELECT LAST_INSERT_ID() AS id', { type: QueryTypes.SELECT, transaction });
+  const view = { id, kind: 'station_coordinates', name: 'stations.csv', contentType: 'text/csv', sizeBytes: buffer.length, sha256, uploadedAt: at.toISOString() };
+  return { text, view };
 }
 
 export async function down(queryInterface: QueryInterface) {

@@ -11,6 +11,7 @@ import { Text } from '@/components/ui/text';
 import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { DamageSection } from './damage-section';
 import { FilesSection } from './files-section';
+import { StationSection } from '@/components/stations/station-section';
 import { FindingsPanel } from './findings-panel';
 import { RecordFormContext } from './form-context';
 import { toFormValues, toRecord, type FormValues } from './form-values';
@@ -85,6 +86,7 @@ export function CaptureRecordForm({ detail }: { detail: JobDetail }) {
           <DamageSection photos={photos} defaultLossType={detail.job.lossType} />
           <PanoramasSection />
           <FilesSection jobId={jobId} files={detail.files} editable />
+          <StationSection jobId={jobId} revision={null} hasFile={detail.files.some((f) => f.kind === 'station_coordinates')} />
           <SafetySection />
           <NotesSection />
           <ProcessingSection />

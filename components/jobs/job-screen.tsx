@@ -13,6 +13,7 @@ import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
 import { DueText } from './due-text';
 import { RecordView } from './record-view';
+import { StationSection } from '@/components/stations/station-section';
 import { ReworkChecklist } from '@/components/rework/rework-checklist';
 import { Timeline } from '@/components/rework/timeline';
 import { StatusBadge } from './status-badge';
@@ -64,6 +65,7 @@ export function JobScreen({ id }: { id: number }) {
                   <FindingsPanel findings={revision.data.findings} />
                 </View>
               ) : null}
+              {revision.data ? <StationSection jobId={job.id} revision={revision.data.number} hasFile={revision.data.files.some((f) => f.kind === 'station_coordinates')} /> : null}
             </>
           )}
           <FilesSection jobId={job.id} files={query.data.files} editable={false} />

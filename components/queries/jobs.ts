@@ -113,3 +113,13 @@ export function useFileDetachMutation(jobId: number) {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) }),
   });
 }
+
+export function useStationAnalysisQuery(jobId: number, revision: number | null, enabled = true) {
+  return useQuery({
+    queryKey: [...jobKeys.detail(jobId), 'stations', revision ?? 'draft'],
+    queryFn: () => api.get<{ analysis: import('@/shared/station-analysis').StationAnalysis | null; units: 'ft' | 'm' }>(
+      `/api/jobs/${jobId}/station-analysis${revision ? `?revision=${revision}` : ''}`,
+    ),
+    enabled,
+  });
+}

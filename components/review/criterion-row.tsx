@@ -15,12 +15,14 @@ type Props = {
   current: boolean;
   // Revision whose score this one still carries, until the reviewer changes it.
   carriedFrom?: number | null;
+  // Findings of the station analysis the reviewer may take as a starting comment.
+  suggestions?: string[];
   error?: string;
   onChange: (entry: CriterionEntry) => void;
   onFocus: () => void;
 };
 
-export function CriterionRow({ criterion, applies, entry, current, carriedFrom, error, onChange, onFocus }: Props) {
+export function CriterionRow({ criterion, applies, entry, current, carriedFrom, suggestions = [], error, onChange, onFocus }: Props) {
   const max = scaleMax(criterion.scale);
   const choices = criterion.scale.kind === 'levels'
     ? criterion.scale.levels.map((label, value) => ({ value, short: String(value), label: `${value}: ${label}` }))
@@ -90,6 +92,16 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
               />
             </>
           ) : null}
+          {suggestions.length ? (
+            <View style={styles.suggestions} role="note" aria-label={`Suggested comments for ${criterion.title}`}>
+              <Text variant="label">From the station analysis (suggested, not scored):</Text>
+              {suggestions.map((s) => <Text key={s} variant="small">{`• ${s}`}</Text>)}
+              <Pressable role="button" accessibilityLabel={`Use the suggested comments for ${criterion.title}`}
+                onPress={() => onChange({ ...entry, comment: [entry.comment.trim(), ...suggestions].filter(Boolean).join(' ') })}>
+                <Text style={{ color: colors.accent, fontFamily: fonts.semibold }}>Use as comment</Text>
+              </Pressable>
+            </View>
+          ) : null}
           {error ? <Text role="alert" style={{ color: colors.fail }}>{error}</Text> : null}
         </>
       )}
@@ -108,5 +120,6 @@ const styles = StyleSheet.create({
   choiceText: { fontFamily: fonts.semibold, color: colors.ink },
   reason: { borderWidth: 1, borderColor: colors.muted, borderRadius: 12, paddingHorizontal: space.sm, paddingVertical: 4 },
   comment: { minHeight: 64, borderWidth: 1, borderColor: colors.muted, borderRadius: 6, padding: space.sm, fontFamily: fonts.regular, fontSize: 15, color: colors.ink, backgroundColor: colors.surface },
+  suggestions: { backgroundColor: '#FBF3EE', borderRadius: 4, padding: space.sm, gap: 2 },
   commentMissing: { borderColor: colors.rework, borderWidth: 2 },
 });

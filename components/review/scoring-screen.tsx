@@ -16,6 +16,10 @@ import { Text } from '@/components/ui/text';
 import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { CriterionRow, type CriterionEntry } from './criterion-row';
 import { ChangesPanel } from './changes-panel';
+import { LEVEL_LABELS } from '@/shared/capture-record';
+import { suggestedComments } from '@/shared/station-analysis';
+import { StationPlot } from '@/components/stations/station-plot';
+import { Section } from '@/components/ui/section';
 import { RevisionPanel } from './revision-panel';
 import { ScoreSummary } from './score-summary';
 
@@ -49,6 +53,10 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
   const release = useReleaseMutation();
   const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
 
+  const suggestions = useMemo(
+    () => (workspace.revision.stationAnalysis ? suggestedComments(workspace.revision.stationAnalysis, workspace.revision.record.units, (l) => LEVEL_LABELS[l]) : { spacing: [], registration: [] }),
+    [workspace.revision],
+  );
   const holdsClaim = second !== null || (job.claimedBy?.id === me?.id && me?.role === 'reviewer');
   const sheet: ScoreSheet = useMemo(() => Object.fromEntries(rubric.criteria.map((c) => [c.key, entries[c.key].score])), [entries, rubric]);
   const evaluation = evaluate(rubric, sheet);
@@ -98,6 +106,7 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
           criterion={criterion}
           applies={applicable[criterion.key]}
           entry={entries[criterion.key]}
+          suggestions={criterion.key === 'spacing' ? suggestions.spacing : criterion.key === 'registration' ? suggestions.registration : []}
           carriedFrom={criterion.key in carried && entries[criterion.key].score === carried[criterion.key].score ? workspace.previous!.revision : null}
           current={index === current}
           error={fieldErrors[`scores.${criterion.key}`] ?? fieldErrors[`scores.${criterion.key}.comment`]}
@@ -131,6 +140,11 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
         <View style={[{ gap: space.md }, wide ? { flex: 1 } : undefined]}>
           {workspace.previous ? <ChangesPanel previous={workspace.previous} currentRevision={workspace.revision.number} /> : null}
           <RevisionPanel revision={workspace.revision} />
+          {workspace.revision.stationAnalysis ? (
+            <Section title="Station layout" summary="Computed by Sightline from the station file">
+              <StationPlot analysis={workspace.revision.stationAnalysis} units={workspace.revision.record.units} />
+            </Section>
+          ) : null}
         </View>
         <View style={wide ? { flex: 1 } : undefined}>{holdsClaim ? rubricColumn : null}</View>
       </View>
