@@ -16,11 +16,13 @@ import { StationFindings } from './station-findings';
 // and sparse stations marked by shape as well as colour, a scale bar, zoom and pan.
 export function StationPlot({ analysis, units, keyboard = false }: { analysis: StationAnalysis; units: LengthUnit; keyboard?: boolean }) {
   const { width: screen } = useWindowDimensions();
+  // The plan fills its column: measured, so it fits a phone, a half-width desktop column or more.
+  const [available, setAvailable] = useState(0);
   const [level, setLevel] = useState<LevelKind>(analysis.levels[0]?.level ?? 'ground');
   const [zoom, setZoom] = useState(1);
   const [pan, setPan] = useState({ x: 0, y: 0 });
   const data = analysis.levels.find((l) => l.level === level) ?? analysis.levels[0];
-  const width = Math.min(screen - 48, 720);
+  const width = Math.max(200, Math.min(available || screen - 48, 720));
   const height = Math.round(width * 0.7);
   const base = useMemo(() => boundsOf(data?.stations ?? [], 1), [data]);
   const view = viewFor(base, zoom, pan);
@@ -39,7 +41,7 @@ export function StationPlot({ analysis, units, keyboard = false }: { analysis: S
   const showNumbers = data.stations.length <= 200;
 
   return (
-    <View style={{ gap: space.sm }}>
+    <View style={{ gap: space.sm }} onLayout={(e) => setAvailable(e.nativeEvent.layout.width)}>
       {analysis.levels.length > 1 ? (
         <ChoiceField<LevelKind> label="Level" options={analysis.levels.map((l) => ({ value: l.level, label: LEVEL_LABELS[l.level] }))} value={level}
           onChange={(l) => { setLevel(l); setZoom(1); setPan({ x: 0, y: 0 }); }} />
