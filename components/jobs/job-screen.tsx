@@ -11,6 +11,7 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { AssignmentPanel } from './assignment-panel';
 import { DueText } from './due-text';
 import { RecordView } from './record-view';
 import { StationSection } from '@/components/stations/station-section';
@@ -41,6 +42,7 @@ export function JobScreen({ id }: { id: number }) {
         <Text variant="small">{`Site visit ${formatDate(job.siteVisitDate)} · Technician ${job.technician.name}`}</Text>
       </View>
 
+      {user?.role === 'manager' || user?.role === 'admin' ? <AssignmentPanel job={job} /> : null}
       {job.status === 'rework_requested' || (latest !== null && latest > 1) ? <ReworkChecklist jobId={job.id} editable={canEdit} /> : null}
       {canEdit ? (
         <CaptureRecordForm key={query.data.recordVersion} detail={query.data} />

@@ -123,3 +123,11 @@ export function useStationAnalysisQuery(jobId: number, revision: number | null, 
     enabled,
   });
 }
+
+export function useJobUpdateMutation(jobId: number) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (changes: { technicianId?: number; priority?: Priority; dueAt?: string }) => api.patch<{ job: JobSummary }>(`/api/jobs/${jobId}`, changes),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.root }),
+  });
+}
