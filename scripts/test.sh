@@ -46,11 +46,14 @@ set +e
 mkdir -p tests/e2e/artifacts
 npx jest --runInBand --json --outputFile="$DATA_DIR/jest-results.json" "$@"
 status=$?
-node -e '
+summary=$(node -e '
   const r = require(process.argv[1]);
   const skipped = r.numPendingTests + r.numTodoTests;
   const failedSuites = r.numRuntimeErrorTestSuites;
   if (failedSuites) console.log(failedSuites + " test file(s) failed to run");
   console.log(`${r.numPassedTests} passed, ${r.numFailedTests + failedSuites} failed` + (skipped ? `, ${skipped} skipped` : ""));
-' "$DATA_DIR/jest-results.json" || echo "0 passed, 1 failed"
+' "$DATA_DIR/jest-results.json" 2>/dev/null || echo "0 passed, 1 failed")
+# Stop the services first, so the summary is the last line (CI reads it).
+cleanup
+echo "$summary"
 exit $status
