@@ -115,3 +115,13 @@ wait_for_port() {
   done
   log "$2 did not open port $1; see $DATA_DIR/log"; exit 1
 }
+
+# Stops what this script started (the app server, the fakes, MariaDB), once.
+SERVER_PID=""
+cleanup() {
+  trap - EXIT INT TERM
+  set +e  # a failing stop must not skip the rest of the clean-up
+  [ -n "$SERVER_PID" ] && kill "$SERVER_PID" 2>/dev/null && wait "$SERVER_PID" 2>/dev/null
+  stop_fakes
+  stop_mariadb
+}

@@ -15,14 +15,6 @@ source scripts/env.sh
 source scripts/provision.sh
 set -e
 
-SERVER_PID=""
-cleanup() {
-  trap - EXIT INT TERM
-  set +e  # a failing stop must not skip the rest of the clean-up
-  [ -n "$SERVER_PID" ] && kill "$SERVER_PID" 2>/dev/null && wait "$SERVER_PID" 2>/dev/null
-  stop_fakes
-  stop_mariadb
-}
 trap cleanup EXIT INT TERM
 
 ensure_node_modules

@@ -38,8 +38,8 @@ export const PRIORITY_LABELS: Record<Priority, string> = {
   catastrophe: 'Catastrophe event',
 };
 
-export type JobSummary = {
-  id: number;
+// The facts of a job as a manager enters them (dates as ISO text).
+export type JobFields = {
   claimReference: string;
   street: string;
   city: string;
@@ -50,6 +50,13 @@ export type JobSummary = {
   siteVisitDate: string | null;
   dueAt: string;
   priority: Priority;
+};
+
+// What POST /api/jobs takes.
+export type JobInput = JobFields & { technicianId: number };
+
+export type JobSummary = JobFields & {
+  id: number;
   status: JobStatus;
   technician: { id: number; name: string };
   revisionCount: number;

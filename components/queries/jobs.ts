@@ -1,7 +1,7 @@
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { CaptureRecord } from '@/shared/capture-record';
 import type { FileKind, StoredFile } from '@/shared/files';
-import type { JobStatus, JobSummary, LossType, Priority, PropertyType } from '@/shared/jobs';
+import type { JobInput, JobStatus, JobSummary, Priority } from '@/shared/jobs';
 import type { CheckResult, Finding } from '@/shared/pre-submit-checks';
 import { api } from '@/components/lib/api-client';
 
@@ -56,19 +56,7 @@ export function useTechniciansQuery() {
   });
 }
 
-export type NewJob = {
-  claimReference: string;
-  street: string;
-  city: string;
-  postcode: string;
-  propertyType: PropertyType;
-  lossType: LossType;
-  lossDate: string;
-  siteVisitDate: string | null;
-  dueAt: string;
-  priority: Priority;
-  technicianId: number;
-};
+export type NewJob = JobInput;
 
 export function useJobCreateMutation() {
   const queryClient = useQueryClient();

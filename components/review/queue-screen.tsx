@@ -1,6 +1,6 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMemo, useState } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import type { SortingState } from '@tanstack/react-table';
 import { JOB_STATUS_LABELS } from '@/shared/jobs';
 import { queueSearch, QUEUE_PARAM_KEYS, type QueueParams } from '@/shared/queue-params';
@@ -15,7 +15,7 @@ import { HelpOverlay } from '@/components/ui/help-overlay';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
-import { colors, space } from '@/components/ui/theme';
+import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { queueColumns } from './queue-columns';
 import { QueueFilters } from './queue-filters';
 import { DisputesPanel } from '@/components/rework/disputes-panel';
@@ -43,6 +43,7 @@ export function QueueScreen() {
   const [selected, setSelected] = useState(0);
   const [help, setHelp] = useState(false);
   const isReviewer = me?.role === 'reviewer';
+  const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
 
   const rows = queue.data?.rows ?? [];
   const page = queue.data?.page ?? 1;
@@ -74,7 +75,7 @@ export function QueueScreen() {
     <Screen
       title="Queue"
       subtitle="Capture records waiting for review. Overdue first, then by due time and priority."
-      actions={<Button label="Keyboard keys (?)" tone="secondary" onPress={() => setHelp(true)} />}
+      actions={wide ? <Button label="Keyboard keys (?)" tone="secondary" onPress={() => setHelp(true)} /> : null}
     >
       <Text role="status">
         {(['submitted', 'resubmitted', 'in_review', 'rework_requested'] as const).map((s) => `${JOB_STATUS_LABELS[s]}: ${counts[s] ?? 0}`).join(' · ')}

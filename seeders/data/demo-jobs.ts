@@ -4,7 +4,7 @@
 // drifting down, a recurring reflective-surface failure, occasional recaptures, uneven.
 import { type CaptureRecord, type LevelKind, type Room } from '../../shared/capture-record';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
-import type { JobStatus, LossType, Priority, PropertyType } from '../../shared/jobs';
+import type { JobFields, JobStatus, LossType, PropertyType } from '../../shared/jobs';
 import type { Decision } from '../../shared/review';
 import { criterionApplies, scaleMax } from '../../shared/rubric';
 import { evaluate, isBelowFullMarks } from '../../shared/scoring';
@@ -61,17 +61,8 @@ export type DemoReview = {
   decision: Decision;
   scores: DemoScore[];
 };
-export type DemoJob = {
-  claimReference: string;
-  street: string;
-  city: string;
-  postcode: string;
-  propertyType: PropertyType;
-  lossType: LossType;
-  lossDate: string;
-  siteVisitDate: string | null;
+export type DemoJob = Omit<JobFields, 'dueAt'> & {
   dueAt: Date;
-  priority: Priority;
   status: JobStatus;
   technicianIndex: number;
   revisions: { record: CaptureRecord; submittedAt: Date }[];

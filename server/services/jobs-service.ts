@@ -1,5 +1,5 @@
 import { fn, col, Op, type WhereOptions } from 'sequelize';
-import type { JobStatus, JobSummary, LossType, Priority, PropertyType } from '../../shared/jobs';
+import type { JobInput, JobStatus, JobSummary } from '../../shared/jobs';
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, sequelize, StoredFile, User } from '../models';
@@ -8,19 +8,6 @@ import { findJobFor } from './job-access';
 
 type Actor = Express.User;
 
-export type JobInput = {
-  claimReference: string;
-  street: string;
-  city: string;
-  postcode: string;
-  propertyType: PropertyType;
-  lossType: LossType;
-  lossDate: string;
-  siteVisitDate: string | null;
-  dueAt: string;
-  priority: Priority;
-  technicianId: number;
-};
 
 function toSummary(job: Job, revisionCount: number): JobSummary {
   return {
