@@ -89,6 +89,7 @@ export type ReworkItemView = {
   stockReason: string | null;
   response: ReworkResponse | null;
   responseNote: string | null;
+  responseFileIds: number[];
   respondedAt: string | null;
   disputeOutcome: 'upheld' | 'withdrawn' | null;
   disputeNote: string | null;

@@ -43,7 +43,7 @@ export function JobScreen({ id }: { id: number }) {
       </View>
 
       {user?.role === 'manager' || user?.role === 'admin' ? <AssignmentPanel job={job} /> : null}
-      {job.status === 'rework_requested' || (latest !== null && latest > 1) ? <ReworkChecklist jobId={job.id} editable={canEdit} /> : null}
+      {job.status === 'rework_requested' || (latest !== null && latest > 1) ? <ReworkChecklist jobId={job.id} editable={canEdit} files={query.data.files} /> : null}
       {canEdit ? (
         <CaptureRecordForm key={query.data.recordVersion} detail={query.data} />
       ) : (

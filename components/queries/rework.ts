@@ -17,8 +17,8 @@ export function useReworkItemsQuery(jobId: number) {
 export function useReworkAnswerMutation(jobId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ itemId, response, note }: { itemId: number; response: ReworkResponse; note: string }) =>
-      api.put<{ item: ReworkItemView }>(`/api/rework-items/${itemId}/response`, { response, note }),
+    mutationFn: ({ itemId, response, note, fileIds }: { itemId: number; response: ReworkResponse; note: string; fileIds: number[] }) =>
+      api.put<{ item: ReworkItemView }>(`/api/rework-items/${itemId}/response`, { response, note, fileIds }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) }),
   });
 }

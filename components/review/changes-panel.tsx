@@ -21,6 +21,7 @@ export function ChangesPanel({ previous, currentRevision }: { previous: NonNulla
           </View>
           <Text variant="small">{`Asked: ${item.instruction}`}</Text>
           {item.responseNote ? <Text variant="small">{`Answer: ${item.responseNote}`}</Text> : null}
+          {item.responseFileIds.length ? <Text variant="small">{`Files attached to the answer: ${item.responseFileIds.map((id) => `#${id}`).join(', ')} (see Files)`}</Text> : null}
         </View>
       ))}
       <Text variant="label">{`What changed (${previous.changes.length})`}</Text>

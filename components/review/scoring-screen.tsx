@@ -20,6 +20,7 @@ import { LEVEL_LABELS } from '@/shared/capture-record';
 import { suggestedComments } from '@/shared/station-analysis';
 import { StationPlot } from '@/components/stations/station-plot';
 import { Section } from '@/components/ui/section';
+import { ReassignOne } from './reassign-one';
 import { RevisionPanel } from './revision-panel';
 import { ScoreSummary } from './score-summary';
 
@@ -128,6 +129,7 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
         <View style={styles.claimBar}>
           <Text>{job.claimedBy ? `Claimed by ${job.claimedBy.name}.` : 'Nobody has claimed this job yet.'}</Text>
           {me?.role === 'reviewer' ? <Button label="Claim to score" onPress={() => claim.mutate(job.id)} busy={claim.isPending} /> : null}
+          {me?.role === 'manager' && second === null ? <ReassignOne jobId={job.id} currentId={job.claimedBy?.id ?? null} /> : null}
           {claim.error ? <Notice tone="error">{claim.error.message}</Notice> : null}
         </View>
       ) : second === null ? (

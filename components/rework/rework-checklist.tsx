@@ -5,13 +5,15 @@ import { ApiError } from '@/components/lib/api-client';
 import { useReworkAnswerMutation, useReworkItemsQuery } from '@/components/queries/rework';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
+import { Checkbox } from '@/components/ui/checkbox';
+import type { StoredFile } from '@/shared/files';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { colors, space } from '@/components/ui/theme';
 
 // The reviewer's failing items, each answered by the technician before resubmitting.
-export function ReworkChecklist({ jobId, editable }: { jobId: number; editable: boolean }) {
+export function ReworkChecklist({ jobId, editable, files }: { jobId: number; editable: boolean; files: StoredFile[] }) {
   const items = useReworkItemsQuery(jobId);
   if (!items.data?.length) return null;
   const open = items.data.filter((i) => !i.response).length;
@@ -19,15 +21,17 @@ export function ReworkChecklist({ jobId, editable }: { jobId: number; editable: 
     <View style={styles.box} role="region" aria-label="Rework requested">
       <Text variant="heading" role="heading" aria-level={2}>Rework requested</Text>
       <Text variant="muted">{open ? `${open} of ${items.data.length} item(s) still need your answer before you can resubmit.` : 'Every item is answered. Correct the record below and submit the next revision.'}</Text>
-      {items.data.map((item, i) => <ReworkItemCard key={item.id} jobId={jobId} item={item} index={i} editable={editable} />)}
+      {items.data.map((item, i) => <ReworkItemCard key={item.id} jobId={jobId} item={item} index={i} editable={editable} files={files} />)}
     </View>
   );
 }
 
-function ReworkItemCard({ jobId, item, index, editable }: { jobId: number; item: ReworkItemView; index: number; editable: boolean }) {
+function ReworkItemCard({ jobId, item, index, editable, files }: { jobId: number; item: ReworkItemView; index: number; editable: boolean; files: StoredFile[] }) {
   const answer = useReworkAnswerMutation(jobId);
   const [response, setResponse] = useState<ReworkResponse | undefined>(item.response ?? undefined);
   const [note, setNote] = useState(item.responseNote ?? '');
+  const [fileIds, setFileIds] = useState<number[]>(item.responseFileIds);
+  const attached = files.filter((f) => item.responseFileIds.includes(f.id));
   const fieldError = answer.error instanceof ApiError ? answer.error.fields.note ?? answer.error.message : undefined;
   return (
     <View style={styles.item} role="group" aria-label={`Rework item ${index + 1}: ${item.title}`}>
@@ -42,12 +46,18 @@ function ReworkItemCard({ jobId, item, index, editable }: { jobId: number; item:
         <>
           <ChoiceField<ReworkResponse> label={`Your answer to item ${index + 1}`} options={REWORK_RESPONSES.map((r) => ({ value: r, label: REWORK_RESPONSE_LABELS[r] }))} value={response} onChange={setResponse} />
           <TextField label={`What you did, or why (item ${index + 1})`} value={note} onChangeText={setNote} multiline error={fieldError} />
+          {files.length ? <Text variant="label">Files that show it (upload new ones under Files)</Text> : null}
+          {files.map((f) => (
+            <Checkbox key={f.id} label={`Attach ${f.name} to item ${index + 1}`} checked={fileIds.includes(f.id)}
+              onChange={(on) => setFileIds(on ? [...fileIds, f.id] : fileIds.filter((id) => id !== f.id))} />
+          ))}
           <Button label={`Save answer ${index + 1}`} tone="secondary" disabled={!response} busy={answer.isPending}
-            onPress={() => response && answer.mutate({ itemId: item.id, response, note })} />
+            onPress={() => response && answer.mutate({ itemId: item.id, response, note, fileIds })} />
         </>
       ) : item.responseNote ? (
         <Text variant="small">{`Technician: ${item.responseNote}`}</Text>
       ) : null}
+      {!editable && attached.length ? <Text variant="small">{`Files: ${attached.map((f) => f.name).join(', ')}`}</Text> : null}
     </View>
   );
 }

@@ -98,6 +98,7 @@ export class ReworkItem extends Model<InferAttributes<ReworkItem>, InferCreation
   declare stockReason: string | null;
   declare response: 'fixed' | 'cannot_fix' | 'disputed' | null;
   declare responseNote: string | null;
+  declare responseFileIds: CreationOptional<number[] | null>;
   declare respondedAt: Date | null;
   declare disputeOutcome: 'upheld' | 'withdrawn' | null;
   declare disputeNote: string | null;
@@ -116,6 +117,7 @@ export class ReworkItem extends Model<InferAttributes<ReworkItem>, InferCreation
         stockReason: { type: DataTypes.STRING(120), allowNull: true },
         response: { type: DataTypes.ENUM('fixed', 'cannot_fix', 'disputed'), allowNull: true },
         responseNote: { type: DataTypes.TEXT, allowNull: true },
+        responseFileIds: { type: DataTypes.JSON, allowNull: true, get() { const v = this.getDataValue('responseFileIds'); return v === null || v === undefined ? null : parseJson(v); } },
         respondedAt: { type: DataTypes.DATE(3), allowNull: true },
         disputeOutcome: { type: DataTypes.ENUM('upheld', 'withdrawn'), allowNull: true },
         disputeNote: { type: DataTypes.TEXT, allowNull: true },

@@ -23,9 +23,11 @@ reworkRouter.put(
     itemId,
     body('response', `Choose one of: ${REWORK_RESPONSES.join(', ')}`).isIn(REWORK_RESPONSES),
     body('note', 'Text of at most 2000 characters').isString().isLength({ max: 2000 }),
+    body('fileIds', 'A list of file ids').optional().isArray({ max: 20 }),
+    body('fileIds.*', 'File ids are whole numbers').isInt({ min: 1 }).toInt(),
   ),
   async (req, res) => {
-    res.json({ item: await answerReworkItem(req.user!, Number(req.params.id), { response: req.body.response, note: req.body.note }) });
+    res.json({ item: await answerReworkItem(req.user!, Number(req.params.id), { response: req.body.response, note: req.body.note, fileIds: req.body.fileIds }) });
   },
 );
 

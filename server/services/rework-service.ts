@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import type { ReworkItemView, ReworkResponse, TimelineEvent } from '../../shared/review';
 import { conflict, invalid, notFound } from '../errors';
-import { AuditEvent, Job, Review, ReworkItem, sequelize, User } from '../models';
+import { AuditEvent, Job, Review, ReworkItem, sequelize, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 
@@ -10,7 +10,7 @@ type Actor = Express.User;
 export function toReworkItemView(item: ReworkItem): ReworkItemView {
   return {
     id: item.id, criterionKey: item.criterionKey, title: item.title, instruction: item.instruction, stockReason: item.stockReason,
-    response: item.response, responseNote: item.responseNote, respondedAt: item.respondedAt ? item.respondedAt.toISOString() : null,
+    response: item.response, responseNote: item.responseNote, responseFileIds: item.responseFileIds ?? [], respondedAt: item.respondedAt ? item.respondedAt.toISOString() : null,
     disputeOutcome: item.disputeOutcome, disputeNote: item.disputeNote,
   };
 }
@@ -27,7 +27,7 @@ export async function listReworkItems(actor: Actor, jobId: number) {
   return (await currentReworkItems(jobId)).map(toReworkItemView);
 }
 
-export async function answerReworkItem(actor: Actor, itemId: number, answer: { response: ReworkResponse; note: string }) {
+export async function answerReworkItem(actor: Actor, itemId: number, answer: { response: ReworkResponse; note: string; fileIds?: number[] }) {
   return sequelize.transaction(async (transaction) => {
     const item = await ReworkItem.findByPk(itemId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!item) throw notFound('Rework item');
@@ -37,7 +37,11 @@ export async function answerReworkItem(actor: Actor, itemId: number, answer: { r
     const current = await currentReworkItems(job.id, transaction);
     if (!current.some((i) => i.id === item.id)) throw conflict('This item belongs to an earlier review.');
     if (answer.response !== 'fixed' && !answer.note.trim()) throw invalid({ note: 'Give the reason' });
-    await item.update({ response: answer.response, responseNote: answer.note.trim() || null, respondedAt: new Date() }, { transaction });
+    const fileIds = [...new Set(answer.fileIds ?? [])];
+    if (fileIds.length && (await StoredFile.count({ where: { id: { [Op.in]: fileIds }, jobId: job.id, detachedAt: null }, transaction })) !== fileIds.length) {
+      throw invalid({ fileIds: 'A file is not attached to this job' });
+    }
+    await item.update({ response: answer.response, responseNote: answer.note.trim() || null, responseFileIds: fileIds, respondedAt: new Date() }, { transaction });
     await recordEvent(transaction, job.id, actor.id, 'rework_answered', { itemId: item.id, title: item.title, response: answer.response });
     return toReworkItemView(item);
   });

@@ -10,6 +10,7 @@ import { submitReview } from '../../server/services/review-service';
 import { claimFor, createSubmittedJob, createUser, fullScores, reworkRequested } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
+import { PNG_1X1 } from '../helpers/sample-files';
 
 const app = createApp();
 afterAll(async () => {
@@ -132,8 +133,12 @@ describe('answering rework and resubmitting', () => {
 
     const noReason = await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'cannot_fix', note: ' ' });
     expect(noReason.body.error.fields).toEqual({ note: 'Give the reason' });
-    const answer = await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'fixed', note: 'Captured the attic from the hatch: 4 stations' });
+    const photo = await signed.agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'attic.png');
+    const foreign = await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'fixed', note: 'x', fileIds: [987654] });
+    expect(foreign.body.error.fields).toEqual({ fileIds: 'A file is not attached to this job' });
+    const answer = await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'fixed', note: 'Captured the attic from the hatch: 4 stations', fileIds: [photo.body.file.id] });
     expect(answer.status).toBe(200);
+    expect(answer.body.item.responseFileIds).toEqual([photo.body.file.id]);
 
     const record = completeRecord({ rooms: [...completeRecord().rooms, { ...completeRecord().rooms[0], key: 'r2', name: 'Attic', level: 'attic', stations: 4 }], totalStations: 9, levels: [{ level: 'ground', stations: 5 }, { level: 'attic', stations: 4 }] });
     const resubmitted = await signed.agent.post(`/api/jobs/${job.id}/submit`).send(record);
