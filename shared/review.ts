@@ -63,6 +63,7 @@ export type Workspace = {
   applicable: Record<string, boolean>;
   claimExpiresAt: string | null;
   secondReviewId: number | null;
+  secondClaimedByMe: boolean;
   previous: {
     revision: number;
     score: number | null;

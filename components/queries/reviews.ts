@@ -101,3 +101,14 @@ export function useReviewersQuery(enabled: boolean) {
     enabled,
   });
 }
+
+export function useSecondClaimMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (secondReviewId: number) => api.post<{ claimExpiresAt: string }>(`/api/second-reviews/${secondReviewId}/claim`),
+    onSettled: () => Promise.all([
+      queryClient.invalidateQueries({ queryKey: ['workspace'] }),
+      queryClient.invalidateQueries({ queryKey: reviewKeys.secondReviews }),
+    ]),
+  });
+}

@@ -14,7 +14,7 @@ export function ReviewScreen({ jobId, second }: { jobId: number; second: number 
   return (
     <Screen title={`Review ${job.claimReference}`} subtitle={`${job.street}, ${job.city} · ${job.technician.name} · revision ${job.revision}`}
       actions={<><StatusBadge status={job.status} /><DueText job={{ dueAt: job.dueAt, status: job.status }} /></>}>
-      <ScoringScreen key={`${job.id}-${job.revision}-${second}-${job.claimedBy?.id ?? 0}`} workspace={workspace.data} />
+      <ScoringScreen key={`${job.id}-${job.revision}-${second}-${job.claimedBy?.id ?? 0}-${workspace.data.secondClaimedByMe}`} workspace={workspace.data} />
     </Screen>
   );
 }

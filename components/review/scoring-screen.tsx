@@ -6,7 +6,7 @@ import { scaleMax } from '@/shared/rubric';
 import { evaluate, type ScoreSheet } from '@/shared/scoring';
 import { ApiError } from '@/components/lib/api-client';
 import { useKeyboard } from '@/components/lib/use-keyboard';
-import { useClaimMutation, useReleaseMutation, useReviewSubmitMutation } from '@/components/queries/reviews';
+import { useClaimMutation, useReleaseMutation, useReviewSubmitMutation, useSecondClaimMutation } from '@/components/queries/reviews';
 import { useSessionQuery } from '@/components/queries/session';
 import { Button } from '@/components/ui/button';
 import { ChoiceField } from '@/components/ui/choice-field';
@@ -58,7 +58,8 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
     () => (workspace.revision.stationAnalysis ? suggestedComments(workspace.revision.stationAnalysis, workspace.revision.record.units, (l) => LEVEL_LABELS[l]) : { spacing: [], registration: [] }),
     [workspace.revision],
   );
-  const holdsClaim = second !== null || (job.claimedBy?.id === me?.id && me?.role === 'reviewer');
+  const holdsClaim = second !== null ? workspace.secondClaimedByMe : job.claimedBy?.id === me?.id && me?.role === 'reviewer';
+  const secondClaim = useSecondClaimMutation();
   const sheet: ScoreSheet = useMemo(() => Object.fromEntries(rubric.criteria.map((c) => [c.key, entries[c.key].score])), [entries, rubric]);
   const evaluation = evaluate(rubric, sheet);
 
@@ -127,8 +128,11 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
       {second ? <Notice tone="info">Blind second review: the first reviewer's score is hidden. Your decision does not change the job.</Notice> : null}
       {!holdsClaim ? (
         <View style={styles.claimBar}>
-          <Text>{job.claimedBy ? `Claimed by ${job.claimedBy.name}.` : 'Nobody has claimed this job yet.'}</Text>
-          {me?.role === 'reviewer' ? <Button label="Claim to score" onPress={() => claim.mutate(job.id)} busy={claim.isPending} /> : null}
+          <Text>{second !== null ? 'Claim this blind review before scoring it.' : job.claimedBy ? `Claimed by ${job.claimedBy.name}.` : 'Nobody has claimed this job yet.'}</Text>
+          {me?.role === 'reviewer' ? (
+            <Button label="Claim to score" onPress={() => (second !== null ? secondClaim.mutate(second) : claim.mutate(job.id))} busy={claim.isPending || secondClaim.isPending} />
+          ) : null}
+          {secondClaim.error ? <Notice tone="error">{secondClaim.error.message}</Notice> : null}
           {me?.role === 'manager' && second === null ? <ReassignOne jobId={job.id} currentId={job.claimedBy?.id ?? null} /> : null}
           {claim.error ? <Notice tone="error">{claim.error.message}</Notice> : null}
         </View>

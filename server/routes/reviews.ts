@@ -3,7 +3,7 @@ import { param, query } from 'express-validator';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { claimJob, reassignClaims, releaseClaim } from '../services/claims-service';
-import { getWorkspace, listOpenSecondReviews, submitReview, submitSecondReview } from '../services/review-service';
+import { claimSecondReview, getWorkspace, listOpenSecondReviews, submitReview, submitSecondReview } from '../services/review-service';
 import { reassignRules, reviewRules } from '../validators/review';
 import { User } from '../models';
 
@@ -42,6 +42,15 @@ reviewsRouter.post('/jobs/:id/reviews', requireRole('reviewer'), validate(jobId,
 reviewsRouter.get('/second-reviews', requireRole('reviewer'), async (req, res) => {
   res.json({ secondReviews: await listOpenSecondReviews(req.user!) });
 });
+
+reviewsRouter.post(
+  '/second-reviews/:id/claim',
+  requireRole('reviewer'),
+  validate(param('id', 'Must be a second-review id').isInt({ min: 1 }).toInt()),
+  async (req, res) => {
+    res.json(await claimSecondReview(req.user!, Number(req.params.id)));
+  },
+);
 
 reviewsRouter.post(
   '/second-reviews/:id/reviews',

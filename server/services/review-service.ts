@@ -65,11 +65,15 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
   });
   if (!job || job.currentRevision === 0) throw notFound('Submitted job');
   let number = job.currentRevision;
+  let secondClaim: string | null | undefined;
+  let secondClaimedByMe = false;
   if (secondReviewId !== null) {
     const second = await SecondReview.findOne({ where: { id: secondReviewId, jobId } });
     if (!second) throw notFound('Second review');
     if (second.firstReviewerId === actor.id) throw forbidden('A blind second review must be made by another reviewer.');
     number = second.revisionNumber;
+    secondClaimedByMe = second.claimedById === actor.id && second.claimExpiresAt !== null && second.claimExpiresAt > new Date();
+    secondClaim = secondClaimedByMe ? second.claimExpiresAt!.toISOString() : null;
   }
   const [revision, rubric] = await Promise.all([revisionOf(jobId, number), currentRubric()]);
   // Working on the job counts as activity: the claimant's claim is extended.
@@ -82,8 +86,9 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
     revision: { number: revision.number, submittedAt: revision.submittedAt.toISOString(), record: revision.data, files: revision.files, findings: revision.findings, stationAnalysis: revision.stationAnalysis },
     rubric: toRubricView(rubric),
     applicable: applicability(rubric.criteria, revision.data),
-    claimExpiresAt: job.claimExpiresAt ? job.claimExpiresAt.toISOString() : null,
+    claimExpiresAt: secondClaim !== undefined ? secondClaim : job.claimExpiresAt ? job.claimExpiresAt.toISOString() : null,
     secondReviewId,
+    secondClaimedByMe,
     // A blind second reviewer sees nothing of earlier reviews.
     previous: secondReviewId === null ? await previousContext(jobId, number) : null,
   };
@@ -226,6 +231,20 @@ export async function listOpenSecondReviews(actor: Actor) {
   return rows.map((r) => ({ id: r.id, jobId: r.jobId, claimReference: refOf.get(r.jobId) ?? '', revision: r.revisionNumber, createdAt: r.createdAt.toISOString() }));
 }
 
+// Locks a blind second review to one reviewer, atomically, like a job claim.
+export async function claimSecondReview(actor: Actor, secondReviewId: number) {
+  const second = await SecondReview.findByPk(secondReviewId);
+  if (!second) throw notFound('Second review');
+  if (second.firstReviewerId === actor.id) throw forbidden('A blind second review must be made by another reviewer.');
+  const now = new Date();
+  const [changed] = await SecondReview.update(
+    { claimedById: actor.id, claimExpiresAt: new Date(now.getTime() + config.review.claimMinutes * 60_000) },
+    { where: { id: secondReviewId, secondReviewId: null, [Op.or]: [{ claimedById: null }, { claimExpiresAt: { [Op.lt]: now } }, { claimedById: actor.id }] } },
+  );
+  if (changed === 0) throw conflict(second.secondReviewId ? 'This second review is already done.' : 'Another reviewer is scoring this second review.');
+  return { secondReviewId, claimExpiresAt: new Date(now.getTime() + config.review.claimMinutes * 60_000).toISOString() };
+}
+
 // The second reviewer scores blind: the first score is never sent, and the job's state
 // does not change. The pair feeds the calibration trend.
 export async function submitSecondReview(actor: Actor, secondReviewId: number, input: ReviewInput) {
@@ -234,6 +253,9 @@ export async function submitSecondReview(actor: Actor, secondReviewId: number, i
     if (!second) throw notFound('Second review');
     if (second.firstReviewerId === actor.id) throw forbidden('A blind second review must be made by another reviewer.');
     if (second.secondReviewId !== null) throw conflict('This second review is already done.');
+    if (second.claimedById !== actor.id || !second.claimExpiresAt || second.claimExpiresAt < new Date()) {
+      throw conflict('Claim this second review before scoring it (your claim may have expired).');
+    }
     const first = await Review.findByPk(second.firstReviewId, { transaction });
     const rubric = await Rubric.findByPk(first!.rubricId, { transaction });
     const revision = await CaptureRevision.findOne({ where: { jobId: second.jobId, number: second.revisionNumber }, transaction });

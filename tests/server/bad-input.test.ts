@@ -88,6 +88,10 @@ const CASES: Record<string, BadInputCase> = {
     body: { decision: 'shrug', scores: [{ key: 'coverage', score: 9, comment: 5 }] },
     fields: ['decision', 'scores.0.comment', 'scores.0.score'],
   },
+  'POST /api/second-reviews/:id/claim': {
+    as: 'reviewer', tables: ['second_reviews'],
+    prepare: async () => ({ path: '/api/second-reviews/latest/claim' }), body: {}, fields: ['id'],
+  },
   'POST /api/second-reviews/:id/reviews': {
     as: 'reviewer', tables: ['reviews'],
     prepare: async () => ({ path: `/api/second-reviews/${(await secondReviewByAnother()).id}/reviews` }),

@@ -200,6 +200,15 @@ describe('blind second reviews', () => {
     const workspace = await agent.get(`/api/jobs/${second.jobId}/workspace?second=${second.id}`);
     expect(workspace.status).toBe(200);
     expect(JSON.stringify(workspace.body)).not.toMatch(/"score":100/);
+    expect(workspace.body.secondClaimedByMe).toBe(false);
+
+    const unclaimed = await agent.post(`/api/second-reviews/${second.id}/reviews`).send({ decision: 'accept', scores: await fullScores() });
+    expect(unclaimed.status).toBe(409);
+    expect((await agent.post(`/api/second-reviews/${second.id}/claim`)).status).toBe(200);
+    const { agent: other } = await signedInAgent(app, 'reviewer');
+    const taken = await other.post(`/api/second-reviews/${second.id}/claim`);
+    expect(taken.status).toBe(409);
+    expect(taken.body.error.message).toBe('Another reviewer is scoring this second review.');
 
     const res = await agent.post(`/api/second-reviews/${second.id}/reviews`).send({ decision: 'accept', scores: await fullScores() });
     expect(res.status).toBe(201);

@@ -131,10 +131,15 @@ const ROUTES: Record<string, RouteCase> = {
     },
   },
   'GET /api/second-reviews': { allowed: ['reviewer'] },
+  'POST /api/second-reviews/:id/claim': {
+    allowed: ['reviewer'],
+    prepare: async () => ({ path: `/api/second-reviews/${(await secondReviewByAnother()).id}/claim` }),
+  },
   'POST /api/second-reviews/:id/reviews': {
     allowed: ['reviewer'],
-    prepare: async () => {
+    prepare: async (me) => {
       const second = await secondReviewByAnother();
+      if (me) await second.update({ claimedById: me.id, claimExpiresAt: new Date(Date.now() + 30 * 60_000) });
       return { path: `/api/second-reviews/${second.id}/reviews`, body: { decision: 'accept', scores: await fullScores() } };
     },
   },
