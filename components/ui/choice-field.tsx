@@ -1,4 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
+import { FieldError } from './field-error';
 import { Text } from './text';
 import { colors, fonts, space } from './theme';
 
@@ -38,11 +39,7 @@ export function ChoiceField<T extends string>({ label, options, value, onChange,
           );
         })}
       </View>
-      {error ? (
-        <Text role="alert" style={styles.error}>
-          {error}
-        </Text>
-      ) : null}
+      <FieldError message={error} />
     </View>
   );
 }
@@ -62,5 +59,4 @@ const styles = StyleSheet.create({
   selected: { backgroundColor: colors.ink, borderColor: colors.ink },
   optionText: { fontFamily: fonts.regular, fontSize: 15, color: colors.ink },
   selectedText: { color: colors.surface, fontFamily: fonts.semibold },
-  error: { color: colors.fail, fontFamily: fonts.semibold, fontSize: 14 },
 });

@@ -1,5 +1,6 @@
 import { forwardRef } from 'react';
 import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+import { FieldError } from './field-error';
 import { Text } from './text';
 import { colors, fonts, space } from './theme';
 
@@ -20,11 +21,7 @@ export const TextField = forwardRef<TextInput, Props>(function TextField({ label
         style={[styles.input, error ? styles.inputError : null, style]}
         {...input}
       />
-      {error ? (
-        <Text role="alert" style={styles.error}>
-          {error}
-        </Text>
-      ) : null}
+      <FieldError message={error} />
     </View>
   );
 });
@@ -43,5 +40,4 @@ const styles = StyleSheet.create({
     color: colors.ink,
   },
   inputError: { borderColor: colors.fail, borderWidth: 2 },
-  error: { color: colors.fail, fontFamily: fonts.semibold, fontSize: 14 },
 });

@@ -42,3 +42,10 @@ export async function send(agent: Agent, method: string, path: string, body?: ob
   }
   return (body ? call.send(body) : call) as unknown as Promise<Sent>;
 }
+
+// A signed-in technician and a job assigned to them.
+export async function technicianWithJob(app: Express) {
+  const { createJob } = await import('./factories');
+  const signed = await signedInAgent(app, 'technician');
+  return { ...signed, job: await createJob({ technicianId: signed.user.id }) };
+}

@@ -2,8 +2,7 @@ import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/app';
 import { CaptureRevision, Job, sequelize } from '../../server/models';
 import { feetToMetres } from '../../shared/units';
-import { createJob } from '../helpers/factories';
-import { countRows, resetSignInLimits, signedInAgent } from '../helpers/http';
+import { countRows, resetSignInLimits, signedInAgent, technicianWithJob } from '../helpers/http';
 import { completeRecord, room } from '../helpers/records';
 
 const app = createApp();
@@ -12,15 +11,10 @@ afterAll(async () => {
   await sequelize.close();
 });
 
-async function technicianWithJob() {
-  const signed = await signedInAgent(app, 'technician');
-  const job = await createJob({ technicianId: signed.user.id });
-  return { ...signed, job };
-}
 
 describe('PUT /api/jobs/:id/record', () => {
   it('autosaves an incomplete draft and returns it on the next load', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const draft = { ...completeRecord(), cameraClass: null, totalStations: null, processing: { confirmed: false, confirmedAt: null } };
     const first = await agent.put(`/api/jobs/${job.id}/record`).send(draft);
     expect(first.status).toBe(200);
@@ -32,13 +26,13 @@ describe('PUT /api/jobs/:id/record', () => {
   });
 
   it('answers 404 when another technician tries to save', async () => {
-    const { job } = await technicianWithJob();
+    const { job } = await technicianWithJob(app);
     const { agent: other } = await signedInAgent(app, 'technician');
     expect((await other.put(`/api/jobs/${job.id}/record`).send(completeRecord())).status).toBe(404);
   });
 
   it('refuses changes once the record is submitted', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord());
     const res = await agent.put(`/api/jobs/${job.id}/record`).send(completeRecord({ notes: 'late edit' }));
     expect(res.status).toBe(409);
@@ -47,7 +41,7 @@ describe('PUT /api/jobs/:id/record', () => {
 
 describe('POST /api/jobs/:id/submit', () => {
   it('freezes revision 1, marks the job submitted and reports warnings without blocking', async () => {
-    const { agent, job, user } = await technicianWithJob();
+    const { agent, job, user } = await technicianWithJob(app);
     const record = completeRecord({ rooms: [room({ lengthM: feetToMetres(12), widthM: feetToMetres(15), stations: 5, doorwayStation: false })] });
     const res = await agent.post(`/api/jobs/${job.id}/submit`).send(record);
     expect(res.status).toBe(201);
@@ -60,7 +54,7 @@ describe('POST /api/jobs/:id/submit', () => {
   });
 
   it('refuses a record with missing facts, naming each field, and writes nothing', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const before = await countRows('capture_revisions');
     const res = await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ totalStations: 9, processing: { confirmed: false, confirmedAt: null } }));
     expect(res.status).toBe(400);
@@ -73,7 +67,7 @@ describe('POST /api/jobs/:id/submit', () => {
   });
 
   it('refuses a damage-area photo that is not attached to the job', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const record = completeRecord({ damageAreas: [{ key: 'd1', roomKey: 'r1', description: 'Stain', lossType: 'water', stationNumbers: [2], photoFileIds: [987654] }] });
     const res = await agent.post(`/api/jobs/${job.id}/submit`).send(record);
     expect(res.status).toBe(400);
@@ -81,7 +75,7 @@ describe('POST /api/jobs/:id/submit', () => {
   });
 
   it('keeps revision 1 unchanged when the record is reworked and resubmitted as revision 2', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ notes: 'first pass' }));
     await Job.update({ status: 'rework_requested' }, { where: { id: job.id } });
 
@@ -98,7 +92,7 @@ describe('POST /api/jobs/:id/submit', () => {
   });
 
   it('cannot be rewritten in the database either: the table refuses updates', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ notes: 'as captured' }));
     await expect(
       sequelize.query('UPDATE capture_revisions SET data = ? WHERE job_id = ?', { replacements: [JSON.stringify(completeRecord({ notes: 'rewritten' })), job.id], type: QueryTypes.UPDATE }),
@@ -110,7 +104,7 @@ describe('POST /api/jobs/:id/submit', () => {
 
 describe('GET /api/jobs/:id/revisions/:number', () => {
   it('lets a reviewer read a submitted revision and answers 404 for one that does not exist', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord());
     const { agent: reviewer } = await signedInAgent(app, 'reviewer');
     expect((await reviewer.get(`/api/jobs/${job.id}/revisions/1`)).status).toBe(200);

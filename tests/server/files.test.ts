@@ -1,8 +1,7 @@
 import crypto from 'node:crypto';
 import { createApp } from '../../server/app';
 import { sequelize, StoredFile } from '../../server/models';
-import { createJob } from '../helpers/factories';
-import { clientAgent, countRows, resetSignInLimits, signedInAgent } from '../helpers/http';
+import { clientAgent, countRows, resetSignInLimits, signedInAgent, technicianWithJob } from '../helpers/http';
 import { EXE_AS_JPG, JPEG_HEADER, PDF_MINIMAL, PNG_1X1, STATION_CSV } from '../helpers/sample-files';
 
 const app = createApp();
@@ -11,17 +10,12 @@ afterAll(async () => {
   await sequelize.close();
 });
 
-async function technicianWithJob() {
-  const signed = await signedInAgent(app, 'technician');
-  const job = await createJob({ technicianId: signed.user.id });
-  return { ...signed, job };
-}
 
 const sha256 = (b: Buffer) => crypto.createHash('sha256').update(b).digest('hex');
 
 describe('POST /api/jobs/:id/files', () => {
   it('stores a photo in object storage with its size and SHA-256', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'kitchen ceiling.png');
     expect(res.status).toBe(201);
     expect(res.body.file).toMatchObject({ kind: 'photo', name: 'kitchen ceiling.png', contentType: 'image/png', sizeBytes: PNG_1X1.length, sha256: sha256(PNG_1X1) });
@@ -35,7 +29,7 @@ describe('POST /api/jobs/:id/files', () => {
     ['sketch', PNG_1X1, 'plan.png', 'image/png'],
     ['station_coordinates', STATION_CSV, 'stations.csv', 'text/csv'],
   ])('accepts a %s whose content is %s', async (kind, buffer, name, type) => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', kind as string).attach('file', buffer as Buffer, name as string);
     expect(res.status).toBe(201);
     expect(res.body.file.contentType).toBe(type);
@@ -46,7 +40,7 @@ describe('POST /api/jobs/:id/files', () => {
     ['a PDF offered as a photo', 'photo', PDF_MINIMAL, 'photo.jpg'],
     ['a photo offered as a coordinate file', 'station_coordinates', PNG_1X1, 'stations.csv'],
   ])('refuses %s by its content and writes nothing', async (_label, kind, buffer, name) => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const before = await countRows('files');
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', kind as string).attach('file', buffer as Buffer, name as string);
     expect(res.status).toBe(400);
@@ -55,7 +49,7 @@ describe('POST /api/jobs/:id/files', () => {
   });
 
   it('refuses a file over the size limit with 413', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const big = Buffer.concat([PNG_1X1, Buffer.alloc(26 * 1024 * 1024)]);
     const before = await countRows('files');
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', big, 'huge.png');
@@ -65,7 +59,7 @@ describe('POST /api/jobs/:id/files', () => {
   });
 
   it('asks for a file when none is sent', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo');
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({ file: 'Choose a file to upload' });
@@ -74,7 +68,7 @@ describe('POST /api/jobs/:id/files', () => {
 
 describe('GET /api/files/:id', () => {
   it('serves the stored bytes to the job\'s technician and to a reviewer, and to no one else', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'p.png');
     const url = `/api/files/${upload.body.file.id}`;
 
@@ -97,7 +91,7 @@ describe('GET /api/files/:id', () => {
 
 describe('DELETE /api/jobs/:id/files/:fileId', () => {
   it('removes the file from the working record but keeps its row for earlier revisions', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'p.png');
     expect((await agent.delete(`/api/jobs/${job.id}/files/${upload.body.file.id}`)).status).toBe(204);
     expect((await agent.get(`/api/jobs/${job.id}`)).body.files).toEqual([]);

@@ -1,7 +1,6 @@
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/models';
-import { createJob } from '../helpers/factories';
-import { countRows, resetSignInLimits, signedInAgent } from '../helpers/http';
+import { countRows, resetSignInLimits, signedInAgent, technicianWithJob } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
 
 const app = createApp();
@@ -13,14 +12,10 @@ afterAll(async () => {
 // A hall walked every 5 ft, then one station 13 ft further on: one weak link (common-practice limit 6 ft).
 const CSV = ['station,level,x,y,unit,room,kind', '1,ground,0,0,ft,Kitchen,station', '2,ground,5,0,ft,Kitchen,station', '3,ground,10,0,ft,Kitchen,station', '4,ground,23,0,ft,Kitchen,station', '5,ground,3,3,ft,Kitchen,panorama'].join('\n');
 
-async function technicianWithJob() {
-  const signed = await signedInAgent(app, 'technician');
-  return { ...signed, job: await createJob({ technicianId: signed.user.id }) };
-}
 
 describe('station coordinate files', () => {
   it('refuses a file with bad rows, naming line and column, and stores nothing', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const before = await countRows('files');
     const bad = 'station,level,x,y,unit,room,kind\n1,ground,0,0,ft,,station\n1,ground,x,0,furlong,,station\n';
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'station_coordinates').attach('file', Buffer.from(bad), 'stations.csv');
@@ -30,7 +25,7 @@ describe('station coordinate files', () => {
   });
 
   it('analyses the working record before submit and stores the analysis with the revision', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'station_coordinates').attach('file', Buffer.from(CSV), 'stations.csv');
     expect(upload.status).toBe(201);
     await agent.put(`/api/jobs/${job.id}/record`).send(completeRecord());
@@ -55,7 +50,7 @@ describe('station coordinate files', () => {
   });
 
   it('answers with no analysis when no station file is attached', async () => {
-    const { agent, job } = await technicianWithJob();
+    const { agent, job } = await technicianWithJob(app);
     expect((await agent.get(`/api/jobs/${job.id}/station-analysis`)).body.analysis).toBeNull();
   });
 });
