@@ -33,11 +33,6 @@ export function scaleMax(scale: Scale): number {
   return scale.kind === 'levels' ? 4 : 1;
 }
 
-export function scaleLabel(scale: Scale, score: number): string {
-  if (scale.kind === 'pass_fail') return score >= 1 ? 'Pass' : 'Fail';
-  return `${score} – ${scale.levels[score]}`;
-}
-
 export function criterionApplies(criterion: Pick<Criterion, 'appliesWhen'>, record: CaptureRecord): boolean {
   switch (criterion.appliesWhen) {
     case 'always':

@@ -1,4 +1,4 @@
-import { Op, UniqueConstraintError } from 'sequelize';
+import { literal, Op, UniqueConstraintError } from 'sequelize';
 import { config } from '../config';
 import { Job, ReworkItem, sequelize, User } from '../models';
 import { enqueueEmail } from './outbox';
@@ -9,7 +9,16 @@ import { reworkReminderEmail } from './templates';
 // second instance (or a second run) queue nothing.
 export async function queueOverdueReworkReminders(now = new Date()) {
   const cutoff = new Date(now.getTime() - config.reworkHours * 3_600_000);
-  const jobs = await Job.findAll({ where: { status: 'rework_requested', pausedAt: { [Op.lte]: cutoff } }, limit: 100 });
+  // Jobs already reminded for this rework request are left out in SQL, so a worker tick does
+  // no per-job work once the reminders are out.
+  const jobs = await Job.findAll({
+    where: {
+      status: 'rework_requested',
+      pausedAt: { [Op.lte]: cutoff },
+      [Op.and]: [literal("NOT EXISTS (SELECT 1 FROM outbox o WHERE o.job_id = `Job`.`id` AND o.kind = 'rework_reminder' AND o.created_at >= `Job`.`paused_at`)")],
+    },
+    limit: 100,
+  });
   let queued = 0;
   for (const job of jobs) {
     const open = await ReworkItem.count({ where: { jobId: job.id, response: null } });

@@ -1,6 +1,4 @@
 // Sightline's e-mails, in plain text and HTML, in our own words.
-import { DECISION_LABELS } from '../../shared/review';
-
 export type Email = { subject: string; text: string; html: string };
 
 const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
@@ -64,8 +62,4 @@ export function reworkReminderEmail(job: JobFacts, reworkDueAt: Date, open: numb
   const subject = `Reminder: rework overdue for ${job.claimReference}`;
   const text = `The rework for claim ${job.claimReference} (${job.street}, ${job.city}) was due ${reworkDueAt.toUTCString()} and ${open} item(s) are still open. Please answer them and resubmit.\n\nOpen the job: ${job.jobUrl}`;
   return { subject, text, html: layout(`Rework overdue: ${job.claimReference}`, [`The rework for ${job.street}, ${job.city} was due ${reworkDueAt.toUTCString()}; ${open} item(s) are still open.`], [], { url: job.jobUrl, label: 'Open the job in Sightline' }) };
-}
-
-export function decisionLabel(decision: keyof typeof DECISION_LABELS) {
-  return DECISION_LABELS[decision];
 }

@@ -7,11 +7,16 @@ export function startOutboxWorker() {
   if (config.outbox.intervalMs <= 0) return () => undefined;
   const transport = createTransport();
   let running = false;
+  // Reminders are due by the hour; looking once a minute is plenty (sending stays fast).
+  let lastReminderCheck = 0;
   const tick = async () => {
     if (running) return;
     running = true;
     try {
-      await queueOverdueReworkReminders();
+      if (Date.now() - lastReminderCheck >= 60_000) {
+        lastReminderCheck = Date.now();
+        await queueOverdueReworkReminders();
+      }
       await sendPendingEmails(transport);
     } catch (error) {
       console.error('outbox worker:', (error as Error).message);

@@ -1,5 +1,6 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { CaptureRecord } from '../../shared/capture-record';
+import { jsonColumn } from './columns';
 
 export class CaptureDraft extends Model<InferAttributes<CaptureDraft>, InferCreationAttributes<CaptureDraft>> {
   declare jobId: number;
@@ -13,7 +14,7 @@ export class CaptureDraft extends Model<InferAttributes<CaptureDraft>, InferCrea
     CaptureDraft.init(
       {
         jobId: { type: DataTypes.INTEGER.UNSIGNED, primaryKey: true },
-        data: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('data')); } },
+        data: jsonColumn('data'),
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
@@ -21,9 +22,4 @@ export class CaptureDraft extends Model<InferAttributes<CaptureDraft>, InferCrea
       { sequelize, tableName: 'capture_drafts' },
     );
   }
-}
-
-// MariaDB stores JSON as LONGTEXT, so the driver may hand back a string.
-export function parseJson<T>(value: T | string): T {
-  return typeof value === 'string' ? (JSON.parse(value) as T) : value;
 }

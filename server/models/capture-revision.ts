@@ -3,7 +3,7 @@ import type { CaptureRecord } from '../../shared/capture-record';
 import type { StoredFile } from '../../shared/files';
 import type { CheckResult } from '../../shared/pre-submit-checks';
 import type { StationAnalysis } from '../../shared/station-analysis';
-import { parseJson } from './capture-draft';
+import { jsonColumn } from './columns';
 
 // Immutable once written (a database trigger refuses updates).
 export class CaptureRevision extends Model<InferAttributes<CaptureRevision>, InferCreationAttributes<CaptureRevision>> {
@@ -23,10 +23,10 @@ export class CaptureRevision extends Model<InferAttributes<CaptureRevision>, Inf
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         jobId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         number: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
-        data: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('data')); } },
-        files: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('files')); } },
-        findings: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('findings')); } },
-        stationAnalysis: { type: DataTypes.JSON, allowNull: true, get() { const v = this.getDataValue('stationAnalysis'); return v === null || v === undefined ? null : parseJson(v); } },
+        data: jsonColumn('data'),
+        files: jsonColumn('files'),
+        findings: jsonColumn('findings'),
+        stationAnalysis: jsonColumn('stationAnalysis', true),
         submittedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         submittedAt: { type: DataTypes.DATE(3), allowNull: false },
       },

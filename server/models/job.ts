@@ -1,6 +1,7 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import { JOB_STATUSES, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES, type JobStatus, type LossType, type Priority, type PropertyType } from '../../shared/jobs';
 import { CAMERA_CLASSES, type CameraClass } from '../../shared/capture-record';
+import { numericColumn } from './columns';
 import type { User } from './user';
 
 export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job>> {
@@ -52,7 +53,7 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
         submittedAt: { type: DataTypes.DATE(3), allowNull: true },
         effectiveDueAt: { type: DataTypes.DATE(3), allowNull: false },
         pausedAt: { type: DataTypes.DATE(3), allowNull: true },
-        pausedMs: { type: DataTypes.BIGINT.UNSIGNED, allowNull: false, defaultValue: 0, get() { return Number(this.getDataValue('pausedMs')); } },
+        pausedMs: numericColumn(DataTypes.BIGINT.UNSIGNED, 'pausedMs', { defaultValue: 0 }),
         claimedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         claimedAt: { type: DataTypes.DATE(3), allowNull: true },
         claimExpiresAt: { type: DataTypes.DATE(3), allowNull: true },

@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { parseJson } from './capture-draft';
+import { jsonColumn } from './columns';
 
 export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCreationAttributes<OutboxMessage>> {
   declare id: CreationOptional<number>;
@@ -26,7 +26,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         jobId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         kind: { type: DataTypes.STRING(40), allowNull: false },
         dedupeKey: { type: DataTypes.STRING(120), allowNull: true },
-        recipients: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('recipients')); } },
+        recipients: jsonColumn('recipients'),
         subject: { type: DataTypes.STRING(200), allowNull: false },
         textBody: { type: DataTypes.TEXT, allowNull: false },
         htmlBody: { type: DataTypes.TEXT, allowNull: false },

@@ -1,7 +1,7 @@
 // Rubrics, reviews and what hangs off them.
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
 import type { Criterion } from '../../shared/rubric';
-import { parseJson } from './capture-draft';
+import { jsonColumn, numericColumn } from './columns';
 
 export type Decision = 'accept' | 'rework' | 'recapture';
 
@@ -18,8 +18,8 @@ export class Rubric extends Model<InferAttributes<Rubric>, InferCreationAttribut
       {
         id: { type: DataTypes.INTEGER.UNSIGNED, autoIncrement: true, primaryKey: true },
         version: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, unique: true },
-        passMark: { type: DataTypes.DECIMAL(4, 1), allowNull: false, get() { return Number(this.getDataValue('passMark')); } },
-        criteria: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('criteria')); } },
+        passMark: numericColumn(DataTypes.DECIMAL(4, 1), 'passMark'),
+        criteria: jsonColumn('criteria'),
         createdById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         createdAt: DataTypes.DATE(3),
       },
@@ -51,7 +51,7 @@ export class Review extends Model<InferAttributes<Review>, InferCreationAttribut
         reviewerId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         rubricId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         kind: { type: DataTypes.ENUM('primary', 'blind_second'), allowNull: false },
-        score: { type: DataTypes.DECIMAL(4, 1), allowNull: true, get() { const v = this.getDataValue('score'); return v === null ? null : Number(v); } },
+        score: numericColumn(DataTypes.DECIMAL(4, 1), 'score', { allowNull: true }),
         passed: { type: DataTypes.BOOLEAN, allowNull: false },
         decision: { type: DataTypes.ENUM('accept', 'rework', 'recapture'), allowNull: false },
         claimedAt: { type: DataTypes.DATE(3), allowNull: true },
@@ -117,7 +117,7 @@ export class ReworkItem extends Model<InferAttributes<ReworkItem>, InferCreation
         stockReason: { type: DataTypes.STRING(120), allowNull: true },
         response: { type: DataTypes.ENUM('fixed', 'cannot_fix', 'disputed'), allowNull: true },
         responseNote: { type: DataTypes.TEXT, allowNull: true },
-        responseFileIds: { type: DataTypes.JSON, allowNull: true, get() { const v = this.getDataValue('responseFileIds'); return v === null || v === undefined ? null : parseJson(v); } },
+        responseFileIds: jsonColumn('responseFileIds', true),
         respondedAt: { type: DataTypes.DATE(3), allowNull: true },
         disputeOutcome: { type: DataTypes.ENUM('upheld', 'withdrawn'), allowNull: true },
         disputeNote: { type: DataTypes.TEXT, allowNull: true },
@@ -173,7 +173,7 @@ export class AuditEvent extends Model<InferAttributes<AuditEvent>, InferCreation
         jobId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         actorId: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         type: { type: DataTypes.STRING(40), allowNull: false },
-        data: { type: DataTypes.JSON, allowNull: false, get() { return parseJson(this.getDataValue('data')); } },
+        data: jsonColumn('data'),
         createdAt: { type: DataTypes.DATE(3), allowNull: false },
       },
       { sequelize, tableName: 'audit_events', timestamps: false },
