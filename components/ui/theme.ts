@@ -1,4 +1,4 @@
-// Sightline's own palette (../shared/GLOSSARY.md "Look"). State is always also written in words.
+// Sightline's own palette (listed in DEVELOPERS.md). State is always also written in words.
 export const colors = {
   ink: '#1B2430',
   paper: '#F7F5F0',

@@ -1,15 +1,14 @@
-import fs from 'node:fs';
-import path from 'node:path';
+import strdFile from '../fixtures/nist-strd-univariate.json';
 import { cohenKappa, landisKoch, mean, pChart, sampleSd, wilsonInterval, Z_95 } from '../../shared/statistics';
 
 type Strd = { certified: Record<string, { mean: number; sd: number }>; data: Record<string, number[]> };
-const strd = JSON.parse(fs.readFileSync(path.resolve(__dirname, '../../../shared/data/nist-strd-univariate.json'), 'utf8')) as Strd;
+const strd = strdFile as unknown as Strd;
 
 const closeRel = (actual: number, expected: number, tolerance: number) =>
   expect(Math.abs(actual - expected) / Math.max(Math.abs(expected), 1e-300)).toBeLessThan(tolerance);
 
 describe('mean and sample SD against NIST StRD certified values', () => {
-  // Source: NIST ITL Statistical Reference Datasets, Univariate Summary Statistics (shipped in ../shared/data).
+  // Source: NIST ITL Statistical Reference Datasets, Univariate Summary Statistics (copied into tests/fixtures).
   for (const name of ['Lew', 'Lottery', 'Mavro', 'Michelso', 'NumAcc1', 'PiDigits']) {
     it(`matches ${name} to a relative 1e-12`, () => {
       closeRel(mean(strd.data[name])!, strd.certified[name].mean, 1e-12);
