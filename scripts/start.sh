@@ -23,11 +23,11 @@ cat <<TXT
 
   Sightline is running at $APP_URL   (Ctrl-C stops the app, the fakes and MariaDB)
 
-  Demo sign-ins (Tallowmere Reality Capture, an invented demo firm; password for every account: sightline-demo)
-    technician  tess.okafor@tallowmere.test
-    reviewer    ravi.lindqvist@tallowmere.test
-    manager     mara.delacroix@tallowmere.test
-    admin       alex.brandt@tallowmere.test
+  Demo sign-ins (Orrinvale Site Imaging, an invented demo firm; password for every account: sightline-demo)
+    technician  tess.okafor@orrinvale.test
+    reviewer    ravi.lindqvist@orrinvale.test
+    manager     mara.delacroix@orrinvale.test
+    admin       alex.brandt@orrinvale.test
 
 TXT
 wait "$SERVER_PID"

@@ -63,7 +63,7 @@ export const DEFAULT_RUBRIC: RubricDefinition = {
     {
       key: 'supplementary',
       title: 'Supplementary views',
-      guidance: 'Open cabinets and similar details captured as extra panoramas, with the camera at about mid-cabinet height.',
+      guidance: 'Damaged cabinets are opened and shot as extra panoramas, the camera set level with the shelves so their inside can be seen.',
       weight: 6,
       scale: levels('None where needed', 'Mostly missing', 'Some missing', 'One missing', 'All present'),
       critical: false,

@@ -31,7 +31,7 @@ export function PanoramasSection() {
   const rooms = useWatch({ control, name: 'rooms' });
   return (
     <Section title="Supplementary panoramas" summary="Extra 360 photos not registered to stations, e.g. open cabinets" initiallyOpen={false}>
-      <Text variant="muted">Common practice: open cabinets are captured with the camera at about mid-cabinet height.</Text>
+      <Text variant="muted">Common practice: open each damaged cabinet and set the camera level with its shelves, so the inside shows.</Text>
       <TextInputField name="panoramas.count" label="How many" numeric="numeric" />
       <Text variant="label">Rooms with panoramas</Text>
       <Controller

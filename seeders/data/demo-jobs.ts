@@ -1,4 +1,4 @@
-// Invented demo jobs for Tallowmere Reality Capture in the fictional city of Brambleford,
+// Invented demo jobs for Orrinvale Site Imaging in the fictional city of Maraskell,
 // with 12 weeks of reviews. Deterministic (seeded random numbers), so every machine gets the
 // same demo. Each technician has a pattern for the trends screens to show: steady, improving,
 // drifting down, a recurring reflective-surface failure, occasional recaptures, uneven.
@@ -22,8 +22,8 @@ export function seededRandom(seed: number) {
   };
 }
 
-const STREETS = ['Quillon Lane', 'Larkspur Row', 'Old Tannery Road', 'Wicklow Terrace', 'Heronsgate Close', 'Ashby Mews',
-  'Copperbeech Drive', 'Fennick Street', 'Marrowdale Avenue', 'Sallow Court', 'Tinder Hill', 'Brackenridge Way'];
+const STREETS = ['Orvell Lane', 'Tessaly Row', 'Brindmoor Road', 'Callowin Terrace', 'Smerrit Close', 'Undlecote Mews',
+  'Vantrie Drive', 'Pennowick Street', 'Yarrowlet Avenue', 'Keddlemoor Court', 'Marnish Hill', 'Oxbrindle Way'];
 const PROPERTY_TYPES: PropertyType[] = ['single_family', 'single_family', 'townhouse', 'condo_unit', 'manufactured_home'];
 const LOSS_TYPES: LossType[] = ['water', 'water', 'water', 'fire', 'smoke', 'wind', 'hail', 'other'];
 
@@ -231,9 +231,9 @@ export function demoJobs(now = new Date()): DemoJob[] {
     const priorityRoll = rand();
     const latest = revisions.at(-1)?.record;
     jobs.push({
-      claimReference: `BFD-26-${String(1001 + i)}`,
+      claimReference: `MRK-26-${String(1001 + i)}`,
       street: `${10 + Math.floor(rand() * 190)} ${STREETS[i % STREETS.length]}`,
-      city: 'Brambleford',
+      city: 'Maraskell',
       postcode: `BF-${1000 + Math.floor(rand() * 9000)}`,
       propertyType: PROPERTY_TYPES[Math.floor(rand() * PROPERTY_TYPES.length)],
       lossType: LOSS_TYPES[Math.floor(rand() * LOSS_TYPES.length)],

@@ -1,9 +1,9 @@
-// The invented demo scenario: Tallowmere Reality Capture, a fictional capture firm in the
-// fictional city of Brambleford. Every person, address and claim in the seeders is made up.
+// The invented demo scenario: Orrinvale Site Imaging, a fictional capture firm in the
+// fictional city of Maraskell. Every person, address and claim in the seeders is made up.
 import type { Role } from '../../shared/roles';
 
 export const DEMO_PASSWORD = 'sightline-demo';
-export const DEMO_DOMAIN = 'tallowmere.test';
+export const DEMO_DOMAIN = 'orrinvale.test';
 
 export type DemoPerson = { name: string; email: string; role: Role };
 

@@ -24,7 +24,7 @@ beforeAll(async () => {
   const created = await api.post(`${BASE_URL}/api/jobs`, {
     headers: { 'x-sightline-request': '1' },
     data: {
-      claimReference, street: '9 Fennick Street', city: 'Brambleford', postcode: 'BF-3310', propertyType: 'single_family',
+      claimReference, street: '9 Pennowick Street', city: 'Maraskell', postcode: 'MK-3310', propertyType: 'single_family',
       lossType: 'water', lossDate: '2026-11-25', siteVisitDate: '2026-11-27', dueAt: new Date(Date.now() + 2 * 86_400_000).toISOString(),
       priority: 'urgent', technicianId: tess.id,
     },

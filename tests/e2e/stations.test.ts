@@ -19,7 +19,7 @@ async function jobIdOf(claimReference: string) {
 }
 
 it('shows the technician the plan of their draft while still on site (390 × 844)', async () => {
-  const jobId = await jobIdOf('BFD-26-1115');
+  const jobId = await jobIdOf('MRK-26-1115');
   const browser = await launchBrowser(PHONE);
   try {
     const page = await browser.newPage();
@@ -38,14 +38,14 @@ it('shows the technician the plan of their draft while still on site (390 × 844
 });
 
 it('shows the reviewer the plan of a revision beside the rubric (1440 × 900)', async () => {
-  const jobId = await jobIdOf('BFD-26-1110');
+  const jobId = await jobIdOf('MRK-26-1110');
   const browser = await launchBrowser(DESKTOP);
   try {
     const page = await browser.newPage();
     await signIn(page, demoPerson('hana.').email, DEMO_PASSWORD);
     await page.waitForURL(`${BASE_URL}/queue`);
     await page.goto(`${BASE_URL}/queue/${jobId}`);
-    await page.getByRole('heading', { name: 'Review BFD-26-1110' }).waitFor();
+    await page.getByRole('heading', { name: 'Review MRK-26-1110' }).waitFor();
     await page.getByText(/You hold the claim|Claim to score/).first().waitFor();
     const claim = page.getByRole('button', { name: 'Claim to score' });
     if (await claim.isVisible()) await claim.click();

@@ -30,7 +30,7 @@ export async function submittedJob(api: APIRequestContext, options: { technician
     const { technicians } = await call<{ technicians: { id: number; name: string }[] }>(api, 'get', '/api/technicians');
     const technician = technicians.find((t) => t.name === demoPerson(options.technician).name)!;
     const { job } = await call<{ job: { id: number } }>(api, 'post', '/api/jobs', {
-      claimReference: options.claimReference, street: '31 Ashby Mews', city: 'Brambleford', postcode: 'BF-4410', propertyType: 'single_family',
+      claimReference: options.claimReference, street: '31 Undlecote Mews', city: 'Maraskell', postcode: 'MK-4410', propertyType: 'single_family',
       lossType: options.lossType ?? 'water', lossDate: '2026-11-24', siteVisitDate: '2026-11-26',
       dueAt: new Date(Date.now() + options.dueInHours * 3_600_000).toISOString(), priority: 'normal', technicianId: technician.id,
     });
