@@ -1,7 +1,7 @@
 import { config } from './config';
 import { createApp } from './app';
 import { sequelize } from './models';
-import { startOutboxWorker } from './mail/worker';
+import { startOutboxWorker } from './workers/outbox-worker';
 
 async function main() {
   await sequelize.authenticate();

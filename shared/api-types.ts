@@ -1,5 +1,11 @@
 // Shapes the API sends and receives, shared so client and server cannot drift apart.
+import type { CaptureRecord } from './capture-record';
+import type { StoredFile } from './files';
+import type { JobSummary } from './jobs';
+import type { CheckResult } from './pre-submit-checks';
+import type { Decision, ReworkItemView } from './review';
 import type { Role } from './roles';
+import type { StationAnalysis } from './station-analysis';
 
 export type ApiErrorBody = {
   error: { code: string; message: string; fields?: Record<string, string> };
@@ -8,3 +14,29 @@ export type ApiErrorBody = {
 export type SessionUser = { id: number; name: string; email: string; role: Role };
 
 export type UserRow = SessionUser & { active: boolean; createdAt: string };
+
+// GET /api/jobs/:id
+export type JobDetail = {
+  job: JobSummary;
+  record: CaptureRecord;
+  recordVersion: number;
+  revisions: { number: number; submittedAt: string }[];
+  files: StoredFile[];
+};
+
+// GET /api/jobs/:id/revisions/:n
+export type RevisionView = { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult; stationAnalysis: StationAnalysis | null };
+
+// POST /api/jobs/:id/reviews and /api/second-reviews/:id/reviews
+export type ReviewResult = { reviewId: number; score: number | null; passed: boolean; decision?: Decision; failedRules?: string[] };
+
+// GET /api/second-reviews
+export type OpenSecondReview = { id: number; jobId: number; claimReference: string; revision: number; createdAt: string };
+
+// GET /api/disputes
+export type Dispute = ReworkItemView & { jobId: number; claimReference: string; technician: string };
+
+// GET /api/mailbox (what the local fake SMTP server caught)
+export type MailboxMessage = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string };
+
+export type PersonRef = { id: number; name: string };

@@ -2,6 +2,8 @@
 // database.js reads the same DB_* variables for sequelize-cli.
 import crypto from 'node:crypto';
 
+import { DEFAULT_CLAIM_MINUTES } from '../../shared/review-rules';
+
 const env = process.env;
 const nodeEnv = env.NODE_ENV ?? 'development';
 
@@ -62,7 +64,7 @@ export const config = {
     secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? 'S3RVER',
   },
   review: {
-    claimMinutes: number('CLAIM_MINUTES', 30),
+    claimMinutes: number('CLAIM_MINUTES', DEFAULT_CLAIM_MINUTES),
     // Share of accepted first reviews drawn for a blind second review (calibration).
     secondReviewShare: number('SECOND_REVIEW_SHARE', 0.1),
   },

@@ -5,7 +5,7 @@ import { validate } from '../middleware/validate';
 import { claimJob, reassignClaims, releaseClaim } from '../services/claims-service';
 import { claimSecondReview, getWorkspace, listOpenSecondReviews, submitReview, submitSecondReview } from '../services/review-service';
 import { reassignRules, reviewRules } from '../validators/review';
-import { User } from '../models';
+import { listActiveReviewers } from '../services/users-service';
 
 // Mounted at /api: claims, the scoring workspace, decisions and blind second reviews.
 export const reviewsRouter = Router();
@@ -62,6 +62,5 @@ reviewsRouter.post(
 );
 
 reviewsRouter.get('/reviewers', requireRole('manager'), async (_req, res) => {
-  const reviewers = await User.findAll({ where: { role: 'reviewer', active: true }, attributes: ['id', 'name'], order: [['name', 'ASC']] });
-  res.json({ reviewers: reviewers.map((r) => ({ id: r.id, name: r.name })) });
+  res.json({ reviewers: await listActiveReviewers() });
 });

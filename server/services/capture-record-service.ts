@@ -1,11 +1,12 @@
 import { Op } from 'sequelize';
+import type { RevisionView } from '../../shared/api-types';
 import type { CaptureRecord } from '../../shared/capture-record';
 import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
 import { checkCaptureRecord } from '../../shared/pre-submit-checks';
 import { conflict, invalid, notFound } from '../errors';
 import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models';
 import { recordEvent } from './audit-service';
-import { resumeDueClock } from './due-clock';
+import { resumeDueClock } from '../../shared/due-clock';
 import { assertReworkAnswered } from './rework-service';
 import { analyseAttachedFile } from './station-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
@@ -83,7 +84,7 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
   });
 }
 
-export async function getRevision(actor: Actor, jobId: number, number: number) {
+export async function getRevision(actor: Actor, jobId: number, number: number): Promise<RevisionView> {
   await findJobFor(actor, jobId);
   const revision = await CaptureRevision.findOne({ where: { jobId, number } });
   if (!revision) throw notFound('Revision');

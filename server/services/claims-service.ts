@@ -1,4 +1,6 @@
 import { Op } from 'sequelize';
+
+import { claimExpiresAt } from '../../shared/review-rules';
 import { config } from '../config';
 import { conflict, HttpError, invalid, notFound } from '../errors';
 import { Job, sequelize, User } from '../models';
@@ -8,7 +10,6 @@ import { activeClaim } from './queue-service';
 type Actor = Express.User;
 
 const CLAIMABLE: Job['status'][] = ['submitted', 'resubmitted', 'in_review'];
-const claimLength = () => config.review.claimMinutes * 60_000;
 
 // One conditional UPDATE decides the race: it only matches while nobody else holds a live
 // claim, so of any number of simultaneous claims exactly one changes the row.
@@ -16,7 +17,7 @@ export async function claimJob(actor: Actor, jobId: number) {
   return sequelize.transaction(async (transaction) => {
     const now = new Date();
     const [changed] = await Job.update(
-      { claimedById: actor.id, claimedAt: now, claimExpiresAt: new Date(now.getTime() + claimLength()), status: 'in_review' },
+      { claimedById: actor.id, claimedAt: now, claimExpiresAt: claimExpiresAt(now, config.review.claimMinutes), status: 'in_review' },
       {
         where: {
           id: jobId,
@@ -71,7 +72,7 @@ export async function reassignClaims(actor: Actor, input: { toReviewerId: number
     for (const job of jobs) {
       if (!CLAIMABLE.includes(job.status)) continue;
       const from = job.claimedById;
-      await job.update({ claimedById: target.id, claimedAt: now, claimExpiresAt: new Date(now.getTime() + claimLength()), status: 'in_review' }, { transaction });
+      await job.update({ claimedById: target.id, claimedAt: now, claimExpiresAt: claimExpiresAt(now, config.review.claimMinutes), status: 'in_review' }, { transaction });
       await recordEvent(transaction, job.id, actor.id, 'claim_reassigned', { from, to: target.id });
     }
     return { moved: jobs.filter((j) => j.claimedById === target.id).length };

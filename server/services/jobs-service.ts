@@ -1,6 +1,8 @@
 import { fn, col, Op, type WhereOptions } from 'sequelize';
+import type { JobDetail } from '../../shared/api-types';
 import type { JobInput, JobStatus, JobSummary } from '../../shared/jobs';
 import { emptyCaptureRecord } from '../../shared/capture-record';
+import { effectiveDueAt } from '../../shared/due-clock';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, sequelize, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
@@ -87,7 +89,7 @@ export async function updateJob(actor: Actor, jobId: number, changes: Partial<Pi
     job.set(rest);
     if (dueAt !== undefined) {
       job.dueAt = new Date(dueAt);
-      job.effectiveDueAt = new Date(job.dueAt.getTime() + job.pausedMs);
+      job.effectiveDueAt = effectiveDueAt(job.dueAt, job.pausedMs);
     }
     await job.save({ transaction });
     if (changes.technicianId !== undefined && changes.technicianId !== previousTechnician) {
@@ -104,7 +106,7 @@ export async function getJobSummary(actor: Actor, jobId: number): Promise<JobSum
   return toSummary(job!, counts.get(jobId) ?? 0);
 }
 
-export async function getJobDetail(actor: Actor, jobId: number) {
+export async function getJobDetail(actor: Actor, jobId: number): Promise<JobDetail> {
   const summary = await getJobSummary(actor, jobId);
   const [draft, revisions, files] = await Promise.all([
     CaptureDraft.findByPk(jobId),

@@ -1,54 +1,24 @@
 import { Op } from 'sequelize';
+import type { OpenSecondReview } from '../../shared/api-types';
 import type { CaptureRecord } from '../../shared/capture-record';
 import type { Decision, ScoreInput, Workspace } from '../../shared/review';
-import { criterionApplies, scaleMax, type Criterion } from '../../shared/rubric';
-import { evaluate, isBelowFullMarks, type ScoreSheet } from '../../shared/scoring';
+import { type Criterion, scaleMax } from '../../shared/rubric';
+import { isBelowFullMarks } from '../../shared/scoring';
+import { applicability, claimExpiresAt, decisionProblem, validateScores } from '../../shared/review-rules';
+import { evaluate } from '../../shared/scoring';
 import { config } from '../config';
 import { conflict, forbidden, invalid, notFound } from '../errors';
 import { CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, sequelize, User } from '../models';
 import { recordEvent } from './audit-service';
 import { assertHoldsClaim } from './claims-service';
-import { pauseDueClock } from './due-clock';
+import { pauseDueClock } from '../../shared/due-clock';
 import { toReworkItemView } from './rework-service';
-import { queueDecisionEmail } from '../mail/review-emails';
+import { queueDecisionEmail } from './decision-email-service';
 import { carriesOver, diffRevisions } from '../../shared/revision-diff';
 import { toQueueRow } from './queue-service';
 import { currentRubric, toRubricView } from './rubric-service';
 
 type Actor = Express.User;
-
-export function applicability(criteria: Criterion[], record: CaptureRecord) {
-  return Object.fromEntries(criteria.map((c) => [c.key, criterionApplies(c, record)]));
-}
-
-// Checks a score sheet against the rubric and the record; field names follow the form.
-export function validateScores(criteria: Criterion[], record: CaptureRecord, scores: ScoreInput[]) {
-  const fields: Record<string, string> = {};
-  const byKey = new Map(scores.map((s) => [s.key, s]));
-  const applies = applicability(criteria, record);
-  for (const extra of scores.filter((s) => !criteria.some((c) => c.key === s.key))) fields[`scores.${extra.key}`] = 'Not a criterion of this rubric';
-  for (const criterion of criteria) {
-    const field = `scores.${criterion.key}`;
-    const input = byKey.get(criterion.key);
-    if (!applies[criterion.key]) {
-      if (input && input.score !== null) fields[field] = 'This criterion does not apply to this record';
-      continue;
-    }
-    if (!input || input.score === null) {
-      fields[field] = 'Score this criterion';
-      continue;
-    }
-    const max = scaleMax(criterion.scale);
-    if (!Number.isInteger(input.score) || input.score < 0 || input.score > max) {
-      fields[field] = `Score from 0 to ${max}`;
-      continue;
-    }
-    if (input.stockReason && !criterion.stockReasons.includes(input.stockReason)) fields[`${field}.stockReason`] = 'Choose a listed reason';
-    if (isBelowFullMarks(criterion, input.score) && !input.comment.trim()) fields[`${field}.comment`] = 'Explain what falls short';
-  }
-  const sheet: ScoreSheet = Object.fromEntries(criteria.map((c) => [c.key, applies[c.key] ? (byKey.get(c.key)?.score ?? undefined) : null]));
-  return { fields, sheet };
-}
 
 async function revisionOf(jobId: number, number: number) {
   const revision = await CaptureRevision.findOne({ where: { jobId, number } });
@@ -78,7 +48,7 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
   const [revision, rubric] = await Promise.all([revisionOf(jobId, number), currentRubric()]);
   // Working on the job counts as activity: the claimant's claim is extended.
   if (secondReviewId === null && job.claimedById === actor.id && job.claimExpiresAt && job.claimExpiresAt > new Date()) {
-    job.claimExpiresAt = new Date(Date.now() + config.review.claimMinutes * 60_000);
+    job.claimExpiresAt = claimExpiresAt(new Date(), config.review.claimMinutes);
     await job.save();
   }
   return {
@@ -113,9 +83,8 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
 
     const { fields, sheet } = validateScores(rubric.criteria, revision.data, input.scores);
     const evaluation = evaluate(rubric, sheet);
-    if (input.decision === 'accept' && Object.keys(fields).length === 0 && !evaluation.passed) {
-      fields.decision = `A failing review cannot be accepted: ${evaluation.failedRules.join(' ')}`;
-    }
+    const problem = Object.keys(fields).length === 0 ? decisionProblem(input.decision, evaluation) : null;
+    if (problem) fields.decision = problem;
     if (Object.keys(fields).length) throw invalid(fields);
 
     const now = new Date();
@@ -216,7 +185,7 @@ export async function previousContext(jobId: number, currentRevision: number) {
   return { revision: previous.revisionNumber, score: previous.score, decision: previous.decision, changes, items: items.map(toReworkItemView), carried };
 }
 
-export async function listOpenSecondReviews(actor: Actor) {
+export async function listOpenSecondReviews(actor: Actor): Promise<OpenSecondReview[]> {
   const rows = await SecondReview.findAll({
     where: {
       secondReviewId: null,
@@ -237,12 +206,13 @@ export async function claimSecondReview(actor: Actor, secondReviewId: number) {
   if (!second) throw notFound('Second review');
   if (second.firstReviewerId === actor.id) throw forbidden('A blind second review must be made by another reviewer.');
   const now = new Date();
+  const expiresAt = claimExpiresAt(now, config.review.claimMinutes);
   const [changed] = await SecondReview.update(
-    { claimedById: actor.id, claimExpiresAt: new Date(now.getTime() + config.review.claimMinutes * 60_000) },
+    { claimedById: actor.id, claimExpiresAt: expiresAt },
     { where: { id: secondReviewId, secondReviewId: null, [Op.or]: [{ claimedById: null }, { claimExpiresAt: { [Op.lt]: now } }, { claimedById: actor.id }] } },
   );
   if (changed === 0) throw conflict(second.secondReviewId ? 'This second review is already done.' : 'Another reviewer is scoring this second review.');
-  return { secondReviewId, claimExpiresAt: new Date(now.getTime() + config.review.claimMinutes * 60_000).toISOString() };
+  return { secondReviewId, claimExpiresAt: expiresAt.toISOString() };
 }
 
 // The second reviewer scores blind: the first score is never sent, and the job's state
@@ -260,8 +230,10 @@ export async function submitSecondReview(actor: Actor, secondReviewId: number, i
     const rubric = await Rubric.findByPk(first!.rubricId, { transaction });
     const revision = await CaptureRevision.findOne({ where: { jobId: second.jobId, number: second.revisionNumber }, transaction });
     const { fields, sheet } = validateScores(rubric!.criteria, revision!.data, input.scores);
-    if (Object.keys(fields).length) throw invalid(fields);
     const evaluation = evaluate(rubric!, sheet);
+    const problem = Object.keys(fields).length === 0 ? decisionProblem(input.decision, evaluation) : null;
+    if (problem) fields.decision = problem;
+    if (Object.keys(fields).length) throw invalid(fields);
     const job = await Job.findByPk(second.jobId, { transaction });
     const review = await Review.create(
       {

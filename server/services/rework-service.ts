@@ -1,4 +1,5 @@
 import { Op } from 'sequelize';
+import type { Dispute } from '../../shared/api-types';
 import type { ReworkItemView, ReworkResponse, TimelineEvent } from '../../shared/review';
 import { conflict, invalid, notFound } from '../errors';
 import { AuditEvent, Job, Review, ReworkItem, sequelize, StoredFile, User } from '../models';
@@ -53,7 +54,7 @@ export async function assertReworkAnswered(jobId: number, transaction: import('s
   if (open.length) throw invalid({ rework: `Answer every rework item first (${open.length} open: ${open.map((i) => i.title).join(', ')}).` });
 }
 
-export async function listOpenDisputes() {
+export async function listOpenDisputes(): Promise<Dispute[]> {
   const items = await ReworkItem.findAll({ where: { response: 'disputed', disputeOutcome: null }, order: [['respondedAt', 'ASC']], limit: 200 });
   const jobs = await Job.findAll({ where: { id: { [Op.in]: items.map((i) => i.jobId) } }, include: [{ model: User, as: 'technician', attributes: ['name'] }] });
   const byId = new Map(jobs.map((j) => [j.id, j]));

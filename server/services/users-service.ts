@@ -24,6 +24,11 @@ export async function findActiveSessionUser(id: number): Promise<SessionUser | n
   return user && user.active ? user.toSessionUser() : null;
 }
 
+export async function listActiveReviewers(): Promise<{ id: number; name: string }[]> {
+  const reviewers = await User.findAll({ where: { role: 'reviewer', active: true }, attributes: ['id', 'name'], order: [['name', 'ASC']] });
+  return reviewers.map((r) => ({ id: r.id, name: r.name }));
+}
+
 export async function listUsers(): Promise<UserRow[]> {
   const users = await User.findAll({ order: [['role', 'ASC'], ['name', 'ASC']] });
   return users.map((u) => u.toRow());

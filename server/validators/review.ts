@@ -2,7 +2,8 @@ import { body, query } from 'express-validator';
 import { CAMERA_CLASSES } from '../../shared/capture-record';
 import { LOSS_TYPES, PRIORITIES } from '../../shared/jobs';
 import { DECISIONS, QUEUE_SORTS, QUEUE_STATUSES } from '../../shared/review';
-import { APPLIES_WHEN } from '../../shared/rubric';
+import { rubricProblems } from '../../shared/review-rules';
+import { APPLIES_WHEN, type Criterion } from '../../shared/rubric';
 
 const oneOf = (values: readonly string[]) => `Choose one of: ${values.join(', ')}`;
 
@@ -54,6 +55,9 @@ export const rubricRules = [
   body('criteria.*.scale', LEVEL_TEXT).custom((s: { kind: string; levels?: unknown[] }) => s.kind !== 'levels' || (Array.isArray(s.levels) && s.levels.length === 5)),
   body('criteria.*.stockReasons', 'A list of at most 12 reasons').isArray({ max: 12 }),
   body('criteria.*.stockReasons.*', 'Reasons of 2 to 120 characters').isString().trim().isLength({ min: 2, max: 120 }),
-  body('criteria', 'Weights must add up to 100').custom((c: { weight: unknown }[]) => c.reduce((s, x) => s + Number(x.weight), 0) === 100),
-  body('criteria', 'Each key only once').custom((c: { key: unknown }[]) => new Set(c.map((x) => x.key)).size === c.length),
+  body('criteria').custom((criteria: Criterion[]) => {
+    const problem = rubricProblems({ criteria }).criteria;
+    if (problem) throw new Error(problem);
+    return true;
+  }),
 ];

@@ -1,6 +1,7 @@
 import { config } from '../config';
-import { createTransport, sendPendingEmails } from './outbox';
-import { queueOverdueReworkReminders } from './reminders';
+import { createTransport } from '../mail/transport';
+import { sendPendingEmails } from '../services/outbox-service';
+import { queueOverdueReworkReminders } from '../services/reminder-service';
 
 // Runs in every instance; the outbox leases keep them from sending the same row twice.
 export function startOutboxWorker() {

@@ -2,12 +2,13 @@ import { SMTPServer } from 'smtp-server';
 import { simpleParser } from 'mailparser';
 import { AddressInfo } from 'node:net';
 import { createApp } from '../../server/app';
-import * as outbox from '../../server/mail/outbox';
-import { createTransport, sendPendingEmails } from '../../server/mail/outbox';
-import { queueOverdueReworkReminders } from '../../server/mail/reminders';
+import { createTransport } from '../../server/mail/transport';
+import * as outbox from '../../server/services/outbox-service';
+import { sendPendingEmails } from '../../server/services/outbox-service';
+import { queueOverdueReworkReminders } from '../../server/services/reminder-service';
 import { AuditEvent, Job, OutboxMessage, Review, sequelize } from '../../server/models';
 import { submitReview } from '../../server/services/review-service';
-import { claimFor, createSubmittedJob, createUser, fullScores, reworkRequested } from '../helpers/factories';
+import { claimFor, createSubmittedJob, createUser, fullScores, newJobBody, reworkRequested } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
@@ -190,10 +191,7 @@ describe('GET /api/jobs/:id/timeline', () => {
   it('lists the job\'s events in order, for its technician but not another', async () => {
     const technician = await signedInAgent(app, 'technician');
     const { agent: manager } = await signedInAgent(app, 'manager');
-    const created = await manager.post('/api/jobs').send({
-      claimReference: `TL-${Date.now()}`, street: '1 Sallow Court', city: 'Brambleford', postcode: 'BF-1', propertyType: 'townhouse',
-      lossType: 'wind', lossDate: '2026-11-20', siteVisitDate: null, dueAt: new Date(Date.now() + 86_400_000).toISOString(), priority: 'normal', technicianId: technician.user.id,
-    });
+    const created = await manager.post('/api/jobs').send(newJobBody(technician.user.id));
     const jobId = created.body.job.id;
     await technician.agent.post(`/api/jobs/${jobId}/submit`).send(completeRecord());
     const events = (await technician.agent.get(`/api/jobs/${jobId}/timeline`)).body.events;
