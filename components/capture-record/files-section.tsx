@@ -4,7 +4,7 @@ import { Linking, Pressable, StyleSheet, View } from 'react-native';
 import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, FILE_KINDS, type FileKind, type StoredFile } from '@/shared/files';
 import { ApiError } from '@/components/lib/api-client';
 import { formatBytes } from '@/components/lib/format';
-import { useFileDetachMutation, useFileUploadMutation } from '@/components/queries/jobs';
+import { useFileDetachMutation, useFileUploadMutation } from '@/components/queries/job-files';
 import { Button } from '@/components/ui/button';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Notice } from '@/components/ui/notice';

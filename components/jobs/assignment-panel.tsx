@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import type { JobSummary } from '@/shared/jobs';
-import { useJobUpdateMutation, useTechniciansQuery } from '@/components/queries/jobs';
+import { useJobUpdateMutation } from '@/components/queries/jobs';
+import { useTechniciansQuery } from '@/components/queries/technicians';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Select } from '@/components/ui/select';

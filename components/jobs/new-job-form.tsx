@@ -6,7 +6,8 @@ import {
   type LossType, type Priority, type PropertyType,
 } from '@/shared/jobs';
 import { ApiError } from '@/components/lib/api-client';
-import { useJobCreateMutation, useTechniciansQuery, type NewJob } from '@/components/queries/jobs';
+import { useJobCreateMutation, type NewJob } from '@/components/queries/jobs';
+import { useTechniciansQuery } from '@/components/queries/technicians';
 import { Button } from '@/components/ui/button';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Notice } from '@/components/ui/notice';

@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
 import { formatDateTime } from '@/components/lib/format';
-import { useMailboxQuery } from '@/components/queries/rework';
+import { useMailboxQuery } from '@/components/queries/mailbox';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';

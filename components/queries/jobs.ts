@@ -1,29 +1,31 @@
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CaptureRecord } from '@/shared/capture-record';
-import type { FileKind, StoredFile } from '@/shared/files';
-import type { JobInput, JobStatus, JobSummary, Priority } from '@/shared/jobs';
-import type { CheckResult, Finding } from '@/shared/pre-submit-checks';
+// Jobs: the list, one job's detail (its record draft, revisions, files) and its changes.
+import { keepPreviousData, type QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
 import { api } from '@/components/lib/api-client';
+import type { JobDetail, RevisionView } from '@/shared/api-types';
+import type { JobInput, JobStatus, JobSummary, Priority } from '@/shared/jobs';
+import type { StationAnalysis } from '@/shared/station-analysis';
+
+export type JobFilters = { status?: JobStatus[]; technicianId?: number };
 
 export const jobKeys = {
   root: ['jobs'] as const,
-  list: (filters: { status?: JobStatus[]; technicianId?: number }) => [...jobKeys.root, 'list', filters] as const,
+  list: (filters: JobFilters) => [...jobKeys.root, 'list', filters] as const,
   detail: (id: number) => [...jobKeys.root, 'detail', id] as const,
-  revision: (id: number, n: number) => [...jobKeys.root, 'detail', id, 'revision', n] as const,
-  technicians: ['technicians'] as const,
+  revision: (id: number, n: number) => [...jobKeys.detail(id), 'revision', n] as const,
+  stations: (id: number, revision: number | null) => [...jobKeys.detail(id), 'stations', revision ?? 'draft'] as const,
 };
 
-export type JobDetail = {
-  job: JobSummary;
-  record: CaptureRecord;
-  recordVersion: number;
-  revisions: { number: number; submittedAt: string }[];
-  files: StoredFile[];
-};
+// Everything under a job (its revisions, rework items, timeline) hangs below its detail key.
+export function invalidateJob(queryClient: QueryClient, id: number) {
+  return queryClient.invalidateQueries({ queryKey: jobKeys.detail(id) });
+}
 
-export type Revision = { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult };
+export function invalidateJobs(queryClient: QueryClient) {
+  return queryClient.invalidateQueries({ queryKey: jobKeys.root });
+}
 
-export function useJobsQuery(filters: { status?: JobStatus[]; technicianId?: number }) {
+export function useJobsQuery(filters: JobFilters) {
   const parts = [filters.status?.length ? `status=${filters.status.join(',')}` : '', filters.technicianId ? `technicianId=${filters.technicianId}` : ''].filter(Boolean);
   const search = parts.length ? `?${parts.join('&')}` : '';
   return useQuery({
@@ -44,15 +46,17 @@ export function useJobQuery(id: number) {
 export function useRevisionQuery(id: number, number: number | null) {
   return useQuery({
     queryKey: jobKeys.revision(id, number ?? 0),
-    queryFn: async () => (await api.get<{ revision: Revision }>(`/api/jobs/${id}/revisions/${number}`)).revision,
+    queryFn: async () => (await api.get<{ revision: RevisionView }>(`/api/jobs/${id}/revisions/${number}`)).revision,
     enabled: number !== null && number > 0,
   });
 }
 
-export function useTechniciansQuery() {
+export function useStationAnalysisQuery(jobId: number, revision: number | null, enabled = true) {
   return useQuery({
-    queryKey: jobKeys.technicians,
-    queryFn: async () => (await api.get<{ technicians: { id: number; name: string }[] }>('/api/technicians')).technicians,
+    queryKey: jobKeys.stations(jobId, revision),
+    queryFn: () =>
+      api.get<{ analysis: StationAnalysis | null; units: 'ft' | 'm' }>(`/api/jobs/${jobId}/station-analysis${revision ? `?revision=${revision}` : ''}`),
+    enabled,
   });
 }
 
@@ -62,53 +66,7 @@ export function useJobCreateMutation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: NewJob) => api.post<{ job: JobSummary }>('/api/jobs', input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.root }),
-  });
-}
-
-export function useRecordSaveMutation(jobId: number) {
-  return useMutation({
-    mutationFn: (record: CaptureRecord) => api.put<{ version: number; savedAt: string }>(`/api/jobs/${jobId}/record`, record),
-  });
-}
-
-export function useRecordSubmitMutation(jobId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (record: CaptureRecord) =>
-      api.post<{ revision: number; status: JobStatus; submittedAt: string; warnings: Finding[] }>(`/api/jobs/${jobId}/submit`, record),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.root }),
-  });
-}
-
-export function useFileUploadMutation(jobId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ kind, file, name, onProgress }: { kind: FileKind; file: Blob; name: string; onProgress: (f: number) => void }) => {
-      const form = new FormData();
-      form.append('kind', kind);
-      form.append('file', file, name);
-      return api.upload<{ file: StoredFile }>(`/api/jobs/${jobId}/files`, form, onProgress);
-    },
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) }),
-  });
-}
-
-export function useFileDetachMutation(jobId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: (fileId: number) => api.delete<void>(`/api/jobs/${jobId}/files/${fileId}`),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.detail(jobId) }),
-  });
-}
-
-export function useStationAnalysisQuery(jobId: number, revision: number | null, enabled = true) {
-  return useQuery({
-    queryKey: [...jobKeys.detail(jobId), 'stations', revision ?? 'draft'],
-    queryFn: () => api.get<{ analysis: import('@/shared/station-analysis').StationAnalysis | null; units: 'ft' | 'm' }>(
-      `/api/jobs/${jobId}/station-analysis${revision ? `?revision=${revision}` : ''}`,
-    ),
-    enabled,
+    onSuccess: () => invalidateJobs(queryClient),
   });
 }
 
@@ -116,6 +74,6 @@ export function useJobUpdateMutation(jobId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (changes: { technicianId?: number; priority?: Priority; dueAt?: string }) => api.patch<{ job: JobSummary }>(`/api/jobs/${jobId}`, changes),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: jobKeys.root }),
+    onSuccess: () => invalidateJobs(queryClient),
   });
 }

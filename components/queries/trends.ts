@@ -10,7 +10,7 @@ export const periodSearch = (p: Period, extra: Record<string, string | number | 
     .map(([k, v]) => `${k}=${encodeURIComponent(String(v))}`)
     .join('&');
 
-export const trendKeys = { root: ['trends'] as const, of: (kind: string, search: string) => ['trends', kind, search] as const };
+export const trendKeys = { root: ['trends'] as const, of: (kind: string, search: string) => [...trendKeys.root, kind, search] as const };
 
 function useTrend<T>(kind: string, path: string, search: string, enabled = true) {
   return useQuery({ queryKey: trendKeys.of(kind, search), queryFn: () => api.get<T>(`${path}?${search}`), placeholderData: keepPreviousData, enabled });

@@ -1,9 +1,13 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { type QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { UserRow } from '@/shared/api-types';
 import type { Role } from '@/shared/roles';
 import { api } from '@/components/lib/api-client';
 
 export const userKeys = { root: ['users'] as const, list: () => [...userKeys.root, 'list'] as const };
+
+export function invalidateUsers(queryClient: QueryClient) {
+  return queryClient.invalidateQueries({ queryKey: userKeys.root });
+}
 
 export function useUsersQuery() {
   return useQuery({
@@ -18,7 +22,7 @@ export function useUserCreateMutation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: NewUser) => api.post<{ user: UserRow }>('/api/users', input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.root }),
+    onSuccess: () => invalidateUsers(queryClient),
   });
 }
 
@@ -27,6 +31,6 @@ export function useUserUpdateMutation() {
   return useMutation({
     mutationFn: ({ id, ...changes }: { id: number; role?: Role; active?: boolean }) =>
       api.patch<{ user: UserRow }>(`/api/users/${id}`, changes),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.root }),
+    onSuccess: () => invalidateUsers(queryClient),
   });
 }

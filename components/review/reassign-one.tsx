@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { useReassignMutation, useReviewersQuery } from '@/components/queries/reviews';
+import { useReassignMutation } from '@/components/queries/claims';
+import { useReviewersQuery } from '@/components/queries/reviewers';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Select } from '@/components/ui/select';

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { useReassignMutation, useReviewersQuery } from '@/components/queries/reviews';
+import { useReassignMutation } from '@/components/queries/claims';
+import { useReviewersQuery } from '@/components/queries/reviewers';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Select } from '@/components/ui/select';

@@ -1,4 +1,4 @@
-import { useWorkspaceQuery } from '@/components/queries/reviews';
+import { useWorkspaceQuery } from '@/components/queries/workspace';
 import { StatusBadge } from '@/components/jobs/status-badge';
 import { DueText } from '@/components/jobs/due-text';
 import { Notice } from '@/components/ui/notice';

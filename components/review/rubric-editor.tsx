@@ -1,10 +1,11 @@
+import { RUBRIC_WEIGHT_TOTAL, weightTotal } from '@/shared/review-rules';
 import { useEffect } from 'react';
 import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { APPLIES_WHEN, APPLIES_WHEN_LABELS, type AppliesWhen, type Rubric } from '@/shared/rubric';
 import { ApiError } from '@/components/lib/api-client';
 import { formatDateTime } from '@/components/lib/format';
-import { useRubricCreateMutation, useRubricsQuery } from '@/components/queries/reviews';
+import { useRubricCreateMutation, useRubricsQuery } from '@/components/queries/rubrics';
 import { Button } from '@/components/ui/button';
 import { Checkbox } from '@/components/ui/checkbox';
 import { ChoiceField } from '@/components/ui/choice-field';
@@ -37,7 +38,7 @@ export function RubricEditor() {
   const form = useForm<Values>({ defaultValues: { passMark: '85', criteria: [] } });
   const { fields, append, remove } = useFieldArray({ control: form.control, name: 'criteria' });
   const criteria = useWatch({ control: form.control, name: 'criteria' });
-  const weightSum = criteria.reduce((s, c) => s + (Number(c.weight) || 0), 0);
+  const weightSum = weightTotal(criteria);
 
   useEffect(() => {
     if (current) form.reset(toForm(current));
@@ -67,7 +68,7 @@ export function RubricEditor() {
       <Controller control={form.control} name="passMark" render={({ field }) => (
         <TextField label="Pass mark (0 to 100)" inputMode="decimal" value={field.value} onChangeText={field.onChange} error={err('passMark')} />
       )} />
-      <Text role="status" style={{ color: weightSum === 100 ? colors.pass : colors.fail }}>{`Weights add up to ${weightSum} (must be 100)`}</Text>
+      <Text role="status" style={{ color: weightSum === RUBRIC_WEIGHT_TOTAL ? colors.pass : colors.fail }}>{`Weights add up to ${weightSum} (must be ${RUBRIC_WEIGHT_TOTAL})`}</Text>
       {fields.map((field, i) => (
         <View key={field.id} style={styles.card} role="group" aria-label={`Criterion ${i + 1}`}>
           <View style={styles.row}>
@@ -98,7 +99,7 @@ export function RubricEditor() {
       ))}
       <View style={styles.row}>
         <Button label="Add a criterion" tone="secondary" onPress={() => append({ key: `criterion_${fields.length + 1}`, title: '', guidance: '', weight: '0', critical: false, appliesWhen: 'always', kind: 'levels', levels: ['', '', '', '', ''], stockReasons: '' })} />
-        <Button label="Save as a new version" onPress={() => void save()} busy={create.isPending} disabled={weightSum !== 100} />
+        <Button label="Save as a new version" onPress={() => void save()} busy={create.isPending} disabled={weightSum !== RUBRIC_WEIGHT_TOTAL} />
       </View>
       {rubrics.data && rubrics.data.length > 1 ? (
         <Text variant="muted">{`Earlier versions: ${rubrics.data.slice(1).map((r) => `v${r.version} (${formatDateTime(r.createdAt)})`).join(', ')}`}</Text>

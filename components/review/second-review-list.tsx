@@ -1,7 +1,7 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { formatDateTime } from '@/components/lib/format';
-import { useSecondReviewsQuery } from '@/components/queries/reviews';
+import { useSecondReviewsQuery } from '@/components/queries/second-reviews';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';

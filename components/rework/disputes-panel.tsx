@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { useDisputeDecisionMutation, useDisputesQuery, type Dispute } from '@/components/queries/rework';
+import { useDisputeDecisionMutation, useDisputesQuery } from '@/components/queries/rework';
+import { type Dispute } from '@/shared/api-types';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';

@@ -1,7 +1,7 @@
 import { StyleSheet, View } from 'react-native';
 import { describeEvent } from '@/shared/timeline';
 import { formatDateTime } from '@/components/lib/format';
-import { useTimelineQuery } from '@/components/queries/rework';
+import { useTimelineQuery } from '@/components/queries/timeline';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';

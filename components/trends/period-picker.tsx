@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import { useRubricsQuery } from '@/components/queries/reviews';
+import { useRubricsQuery } from '@/components/queries/rubrics';
 import type { Period } from '@/components/queries/trends';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Select } from '@/components/ui/select';

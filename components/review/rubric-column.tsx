@@ -1,0 +1,105 @@
+// The rubric side of the scoring screen: live total, one row per criterion, the decision.
+// The shared review rules run here first, so most mistakes are shown before a round trip.
+import { useRouter } from 'expo-router';
+import { useMemo, useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+
+import { ApiError } from '@/components/lib/api-client';
+import { useReviewSubmitMutation } from '@/components/queries/workspace';
+import { Button } from '@/components/ui/button';
+import { ChoiceField } from '@/components/ui/choice-field';
+import { Notice } from '@/components/ui/notice';
+import { Text } from '@/components/ui/text';
+import { space } from '@/components/ui/theme';
+import { LEVEL_LABELS } from '@/shared/capture-record';
+import { type Decision, DECISION_LABELS, DECISIONS, type Workspace } from '@/shared/review';
+import { decisionProblem, validateScores } from '@/shared/review-rules';
+import { suggestedComments } from '@/shared/station-analysis';
+
+import { CriterionRow } from './criterion-row';
+import { ScoreSummary } from './score-summary';
+import type { useScoreSheet } from './use-score-sheet';
+
+type Props = {
+  workspace: Workspace;
+  scores: ReturnType<typeof useScoreSheet>;
+  current: number;
+  onFocusCriterion: (index: number) => void;
+  stickySummary: boolean;
+};
+
+export function RubricColumn({ workspace, scores, current, onFocusCriterion, stickySummary }: Props) {
+  const router = useRouter();
+  const { rubric, applicable, job } = workspace;
+  const second = workspace.secondReviewId;
+  const carried = workspace.previous?.carried ?? {};
+  const [decision, setDecision] = useState<Decision | undefined>();
+  const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
+  const submit = useReviewSubmitMutation(job.id, second);
+  const { entries, evaluation } = scores;
+  const suggestions = useMemo(
+    () =>
+      workspace.revision.stationAnalysis
+        ? suggestedComments(workspace.revision.stationAnalysis, workspace.revision.record.units, (l) => LEVEL_LABELS[l])
+        : { spacing: [], registration: [] },
+    [workspace.revision],
+  );
+  const acceptProblem = decision ? decisionProblem(decision, evaluation) : null;
+
+  const onSubmit = async () => {
+    if (!decision) return;
+    const inputs = scores.scoreInputs();
+    const local = validateScores(rubric.criteria, workspace.revision.record, inputs).fields;
+    if (Object.keys(local).length) return setFieldErrors(local);
+    setFieldErrors({});
+    try {
+      await submit.mutateAsync({ decision, scores: inputs });
+      router.replace('/queue');
+    } catch (error) {
+      if (error instanceof ApiError) setFieldErrors(error.fields);
+    }
+  };
+
+  return (
+    <View style={{ gap: space.sm }}>
+      <View style={stickySummary ? styles.sticky : undefined}>
+        <ScoreSummary evaluation={evaluation} passMark={rubric.passMark} />
+      </View>
+      <Text variant="muted">{`Rubric version ${rubric.version}. Press ? for keys.`}</Text>
+      {rubric.criteria.map((criterion, index) => (
+        <CriterionRow
+          key={criterion.key}
+          criterion={criterion}
+          applies={applicable[criterion.key]}
+          entry={entries[criterion.key]}
+          suggestions={criterion.key === 'spacing' ? suggestions.spacing : criterion.key === 'registration' ? suggestions.registration : []}
+          carriedFrom={criterion.key in carried && entries[criterion.key].score === carried[criterion.key].score ? workspace.previous!.revision : null}
+          current={index === current}
+          error={fieldErrors[`scores.${criterion.key}`] ?? fieldErrors[`scores.${criterion.key}.comment`]}
+          onFocus={() => onFocusCriterion(index)}
+          onChange={(entry) => scores.setEntry(criterion.key, entry)}
+        />
+      ))}
+      <ChoiceField<Decision>
+        label="Decision"
+        options={DECISIONS.map((d) => ({ value: d, label: DECISION_LABELS[d] }))}
+        value={decision}
+        onChange={setDecision}
+        error={fieldErrors.decision}
+      />
+      {acceptProblem ? <Notice tone="caution">A failing review cannot be accepted. Request rework or a recapture.</Notice> : null}
+      {submit.error instanceof ApiError && !Object.keys(submit.error.fields).length ? <Notice tone="error">{submit.error.message}</Notice> : null}
+      <Button
+        label={second ? 'Save blind second review' : 'Record decision'}
+        onPress={() => void onSubmit()}
+        disabled={!decision || !evaluation.complete}
+        busy={submit.isPending}
+      />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  // position: sticky exists on the web build only; a phone scrolls the summary away.
+  sticky: { position: 'sticky' as 'relative', top: 0, zIndex: 1 },
+});
