@@ -1,10 +1,11 @@
 import crypto from 'node:crypto';
 import type { Role } from '../../shared/roles';
-import { CaptureDraft, CaptureRevision, Job, Review, ReworkItem, Rubric, SecondReview, User } from '../../server/models';
+import { CaptureDraft, CaptureRevision, Job, Review, ReworkItem, Rubric, SecondReview, StoredFile, User } from '../../server/models';
 import { criterionApplies, scaleMax } from '../../shared/rubric';
 import type { CaptureRecord } from '../../shared/capture-record';
 import { completeRecord } from './records';
 import { emptyCaptureRecord } from '../../shared/capture-record';
+import type { FileKind } from '../../shared/files';
 import type { JobStatus } from '../../shared/jobs';
 import { hashPassword } from '../../server/services/users-service';
 
@@ -63,10 +64,33 @@ export async function createJob(overrides: Partial<{ technicianId: number; statu
 export function newJobBody(technicianId: number) {
   return {
     claimReference: `CLM-${Math.random().toString(36).slice(2, 10)}`,
-    street: '22 Larkspur Row', city: 'Brambleford', postcode: 'BF-2207',
+    street: '22 Tessaly Row', city: 'Maraskell', postcode: 'MK-2207',
     propertyType: 'townhouse', lossType: 'water', lossDate: '2026-11-20', siteVisitDate: '2026-11-22',
     dueAt: new Date(Date.now() + 5 * 86_400_000).toISOString(), priority: 'normal', technicianId,
   };
+}
+
+export async function createRevision(job: Job, number: number, record: CaptureRecord = completeRecord(), submittedAt = new Date()) {
+  return CaptureRevision.create({ jobId: job.id, number, data: record, files: [], findings: { missing: [], warnings: [] }, submittedById: job.technicianId, submittedAt });
+}
+
+type ReviewOverrides = Partial<{ revisionNumber: number; rubricId: number; kind: 'primary' | 'blind_second'; score: number; claimedAt: Date | null; decidedAt: Date; dueAt: Date }>;
+
+// A decided review row; `passed` follows the decision unless the score says otherwise.
+export async function createReview(job: Job, reviewerId: number, decision: 'accept' | 'rework' | 'recapture', overrides: ReviewOverrides = {}) {
+  const rubricId = overrides.rubricId ?? (await Rubric.findOne({ order: [['version', 'DESC']] }))!.id;
+  return Review.create({
+    jobId: job.id, revisionNumber: overrides.revisionNumber ?? 1, reviewerId, rubricId, kind: overrides.kind ?? 'primary',
+    score: overrides.score ?? (decision === 'accept' ? 100 : 80), passed: decision === 'accept', decision,
+    claimedAt: overrides.claimedAt ?? null, decidedAt: overrides.decidedAt ?? new Date(), dueAt: overrides.dueAt ?? job.effectiveDueAt,
+  });
+}
+
+export async function createStoredFile(jobId: number, uploadedById: number, overrides: Partial<{ kind: FileKind; originalName: string; contentType: string; sizeBytes: number }> = {}) {
+  return StoredFile.create({
+    jobId, kind: overrides.kind ?? 'photo', originalName: overrides.originalName ?? 'p.png', contentType: overrides.contentType ?? 'image/png',
+    sizeBytes: overrides.sizeBytes ?? 68, sha256: 'a'.repeat(64), storageKey: `jobs/${jobId}/test-${crypto.randomUUID()}`, uploadedById, detachedAt: null,
+  });
 }
 
 // A job whose record was submitted as revision `revision` (default 1), waiting for review.
@@ -75,9 +99,7 @@ export async function createSubmittedJob(overrides: Partial<{ technicianId: numb
   const record = overrides.record ?? completeRecord();
   const revision = overrides.revision ?? 1;
   const submittedAt = new Date();
-  for (let n = 1; n <= revision; n++) {
-    await CaptureRevision.create({ jobId: job.id, number: n, data: record, files: [], findings: { missing: [], warnings: [] }, submittedById: job.technicianId, submittedAt });
-  }
+  for (let n = 1; n <= revision; n++) await createRevision(job, n, record, submittedAt);
   await job.update({ status: revision > 1 ? 'resubmitted' : 'submitted', currentRevision: revision, cameraClass: record.cameraClass, submittedAt, priority: overrides.priority ?? 'normal' });
   return job;
 }
@@ -102,11 +124,7 @@ export async function fullScores(record: CaptureRecord = completeRecord()) {
 export async function secondReviewByAnother() {
   const first = await createUser({ role: 'reviewer' });
   const job = await createSubmittedJob();
-  const rubric = await Rubric.findOne({ order: [['version', 'DESC']] });
-  const review = await Review.create({
-    jobId: job.id, revisionNumber: 1, reviewerId: first.id, rubricId: rubric!.id, kind: 'primary', score: 100, passed: true,
-    decision: 'accept', claimedAt: null, decidedAt: new Date(), dueAt: job.effectiveDueAt,
-  });
+  const review = await createReview(job, first.id, 'accept');
   await job.update({ status: 'accepted' });
   return SecondReview.create({ jobId: job.id, revisionNumber: 1, firstReviewId: review.id, firstReviewerId: first.id, secondReviewId: null, claimedById: null, claimExpiresAt: null });
 }
@@ -115,11 +133,7 @@ export async function secondReviewByAnother() {
 export async function reworkRequested(technicianId?: number) {
   const reviewer = await createUser({ role: 'reviewer' });
   const job = await createSubmittedJob({ technicianId });
-  const rubric = await Rubric.findOne({ order: [['version', 'DESC']] });
-  const review = await Review.create({
-    jobId: job.id, revisionNumber: 1, reviewerId: reviewer.id, rubricId: rubric!.id, kind: 'primary', score: 80, passed: false,
-    decision: 'rework', claimedAt: null, decidedAt: new Date(), dueAt: job.effectiveDueAt,
-  });
+  const review = await createReview(job, reviewer.id, 'rework');
   const item = await ReworkItem.create({
     reviewId: review.id, jobId: job.id, criterionKey: 'coverage', title: 'Coverage completeness', instruction: 'Capture the attic', stockReason: null,
     response: null, responseNote: null, respondedAt: null, disputeOutcome: null, disputeNote: null, disputeDecidedById: null, disputeDecidedAt: null,

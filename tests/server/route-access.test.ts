@@ -7,7 +7,7 @@ import { sequelize } from '../../server/models';
 import { ROLES, type Role } from '../../shared/roles';
 import { createUser, TEST_PASSWORD } from '../helpers/factories';
 import { clientAgent, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
-import { claimFor, createJob, createSubmittedJob, fullScores, newJobBody, reworkRequested, secondReviewByAnother } from '../helpers/factories';
+import { claimFor, createJob, createRevision, createStoredFile, createSubmittedJob, fullScores, newJobBody, reworkRequested, secondReviewByAnother } from '../helpers/factories';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { completeRecord } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
@@ -76,7 +76,7 @@ const ROUTES: Record<string, RouteCase> = {
     allowed: [...ROLES],
     prepare: async (me) => {
       const job = await jobFor(me);
-      await CaptureRevision.create({ jobId: job.id, number: 1, data: completeRecord(), files: [], findings: { missing: [], warnings: [] }, submittedById: job.technicianId, submittedAt: new Date() });
+      await createRevision(job, 1);
       return { path: `/api/jobs/${job.id}/revisions/1` };
     },
   },
@@ -91,7 +91,7 @@ const ROUTES: Record<string, RouteCase> = {
     allowed: ['technician'],
     prepare: async (me) => {
       const job = await jobFor(me);
-      const file = await storedPhoto(job.id, job.technicianId);
+      const file = await createStoredFile(job.id, job.technicianId, { sizeBytes: PNG_1X1.length });
       return { path: `/api/jobs/${job.id}/files/${file.id}` };
     },
   },
@@ -99,7 +99,7 @@ const ROUTES: Record<string, RouteCase> = {
     allowed: [...ROLES],
     prepare: async (me) => {
       const job = await jobFor(me);
-      const file = await storedPhoto(job.id, job.technicianId);
+      const file = await createStoredFile(job.id, job.technicianId, { sizeBytes: PNG_1X1.length });
       await putObject(file.storageKey, PNG_1X1, 'image/png', file.sha256);
       return { path: `/api/files/${file.id}` };
     },
@@ -178,12 +178,6 @@ function jobFor(me: { id: number; role: Role } | null) {
   return createJob({ technicianId: me?.role === 'technician' ? me.id : undefined });
 }
 
-function storedPhoto(jobId: number, uploadedById: number) {
-  return StoredFile.create({
-    jobId, kind: 'photo', originalName: 'p.png', contentType: 'image/png', sizeBytes: PNG_1X1.length,
-    sha256: 'a'.repeat(64), storageKey: `jobs/${jobId}/test-${Math.random().toString(36).slice(2)}`, uploadedById, detachedAt: null,
-  });
-}
 
 describe('API route access', () => {
   it('has an access rule for every registered route, and no rule for a route that is gone', () => {

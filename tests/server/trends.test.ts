@@ -3,7 +3,7 @@
 // January 2020 and shifted by whole weeks. Each expected value is worked out in the comments.
 import { createApp } from '../../server/app';
 import { Job, Review, ReviewScore, Rubric, SecondReview, sequelize } from '../../server/models';
-import { createJob, createUser } from '../helpers/factories';
+import { createJob, createReview, createUser } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent } from '../helpers/http';
 
 const app = createApp();
@@ -19,9 +19,8 @@ const at = (iso: string, hour = 12) => new Date(new Date(`${iso}T${String(hour).
 
 async function review(job: Job, revision: number, decidedAt: Date, score: number, decision: 'accept' | 'rework' | 'recapture', extra: { minutes?: number; late?: boolean; reviewerId?: number; kind?: 'primary' | 'blind_second' } = {}) {
   const rubric = await Rubric.findOne({ order: [['version', 'ASC']] });
-  return Review.create({
-    jobId: job.id, revisionNumber: revision, reviewerId: extra.reviewerId ?? reviewerA.id, rubricId: rubric!.id, kind: extra.kind ?? 'primary',
-    score, passed: decision === 'accept', decision,
+  return createReview(job, extra.reviewerId ?? reviewerA.id, decision, {
+    revisionNumber: revision, rubricId: rubric!.id, kind: extra.kind, score,
     claimedAt: extra.minutes ? new Date(decidedAt.getTime() - extra.minutes * 60_000) : null, decidedAt,
     dueAt: new Date(decidedAt.getTime() + (extra.late ? -3_600_000 : 3_600_000)),
   });
