@@ -86,7 +86,7 @@ build_web_if_stale() {
   local stamp=dist/index.html
   if [ ! -f "$stamp" ] || [ -n "$(find app components shared assets app.json package-lock.json -newer "$stamp" -print -quit 2>/dev/null)" ]; then
     log "building the web app"
-    CI=1 npx expo export --platform web --output-dir dist >"$DATA_DIR/expo-export.log" 2>&1 || { cat "$DATA_DIR/expo-export.log"; exit 1; }
+    npm run -s build:web >"$DATA_DIR/expo-export.log" 2>&1 || { cat "$DATA_DIR/expo-export.log"; exit 1; }
   fi
 }
 
