@@ -1,5 +1,6 @@
 import { Link } from 'expo-router';
 import { View } from 'react-native';
+
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 

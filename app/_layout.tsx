@@ -6,14 +6,13 @@ import { useFonts } from 'expo-font';
 import { Slot } from 'expo-router';
 import { useState } from 'react';
 import { View } from 'react-native';
+
 import { colors } from '@/components/ui/theme';
 
 // Fonts, the query client and the page frame. Navigation decisions live in the group layouts.
 export default function RootLayout() {
   const [fontsLoaded] = useFonts({ PublicSans_400Regular, PublicSans_600SemiBold, PublicSans_700Bold });
-  const [queryClient] = useState(
-    () => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: true } } }),
-  );
+  const [queryClient] = useState(() => new QueryClient({ defaultOptions: { queries: { retry: 1, refetchOnWindowFocus: true } } }));
   if (!fontsLoaded) return <View style={{ flex: 1, backgroundColor: colors.paper }} />;
   return (
     <QueryClientProvider client={queryClient}>

@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import { DataTypes } from 'sequelize';
+
 import { JOB_STATUSES, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES } from '../shared/jobs';
 
 export async function up(queryInterface: QueryInterface) {

@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import { DataTypes } from 'sequelize';
+
 import { FILE_KINDS } from '../shared/files';
 
 // Metadata of uploaded files; the bytes live in S3-compatible storage under storage_key.

@@ -1,5 +1,6 @@
 import type { QueryInterface } from 'sequelize';
 import { DataTypes, QueryTypes } from 'sequelize';
+
 import { CAMERA_CLASSES } from '../shared/capture-record';
 
 // Review state kept on the job row so the queue filters and sorts with indexed columns:
@@ -12,7 +13,11 @@ export async function up(queryInterface: QueryInterface) {
   await queryInterface.addColumn('jobs', 'effective_due_at', { type: DataTypes.DATE(3), allowNull: true });
   await queryInterface.addColumn('jobs', 'paused_at', { type: DataTypes.DATE(3), allowNull: true });
   await queryInterface.addColumn('jobs', 'paused_ms', { type: DataTypes.BIGINT.UNSIGNED, allowNull: false, defaultValue: 0 });
-  await queryInterface.addColumn('jobs', 'claimed_by_id', { type: DataTypes.INTEGER.UNSIGNED, allowNull: true, references: { model: 'users', key: 'id' } });
+  await queryInterface.addColumn('jobs', 'claimed_by_id', {
+    type: DataTypes.INTEGER.UNSIGNED,
+    allowNull: true,
+    references: { model: 'users', key: 'id' },
+  });
   await queryInterface.addColumn('jobs', 'claimed_at', { type: DataTypes.DATE(3), allowNull: true });
   await queryInterface.addColumn('jobs', 'claim_expires_at', { type: DataTypes.DATE(3), allowNull: true });
   await queryInterface.sequelize.query(
@@ -40,6 +45,16 @@ export async function down(queryInterface: QueryInterface) {
     { type: QueryTypes.SELECT },
   );
   for (const key of keys) await db.query(`ALTER TABLE jobs DROP FOREIGN KEY \`${key.name}\``, { type: QueryTypes.RAW });
-  const columns = ['claim_expires_at', 'claimed_at', 'claimed_by_id', 'paused_ms', 'paused_at', 'effective_due_at', 'submitted_at', 'camera_class', 'current_revision'];
+  const columns = [
+    'claim_expires_at',
+    'claimed_at',
+    'claimed_by_id',
+    'paused_ms',
+    'paused_at',
+    'effective_due_at',
+    'submitted_at',
+    'camera_class',
+    'current_revision',
+  ];
   await db.query(`ALTER TABLE jobs ${columns.map((c) => `DROP COLUMN ${c}`).join(', ')}`, { type: QueryTypes.RAW });
 }

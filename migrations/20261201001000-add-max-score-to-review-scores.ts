@@ -10,5 +10,8 @@ export async function up(queryInterface: QueryInterface) {
 
 export async function down(queryInterface: QueryInterface) {
   // Raw ALTER: removeColumn's own look-up query breaks with the mariadb 3 driver.
-  await queryInterface.sequelize.query('ALTER TABLE review_scores DROP INDEX review_scores_criterion_key_max_score_score, DROP COLUMN max_score', { type: QueryTypes.RAW });
+  await queryInterface.sequelize.query(
+    'ALTER TABLE review_scores DROP INDEX review_scores_criterion_key_max_score_score, DROP COLUMN max_score',
+    { type: QueryTypes.RAW },
+  );
 }

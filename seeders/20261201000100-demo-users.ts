@@ -1,5 +1,6 @@
-import type { QueryInterface } from 'sequelize';
 import bcrypt from 'bcryptjs';
+import type { QueryInterface } from 'sequelize';
+
 import { DEMO_PASSWORD, DEMO_PEOPLE } from './data/demo-people';
 
 // Re-runnable: INSERT IGNORE on the unique e-mail never duplicates a person or resets a

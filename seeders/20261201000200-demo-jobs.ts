@@ -1,11 +1,13 @@
-import { QueryTypes, type QueryInterface, type Transaction } from 'sequelize';
-import { DEFAULT_RUBRIC } from '../shared/default-rubric';
-import { DEMO_PEOPLE } from './data/demo-people';
 import crypto from 'node:crypto';
-import { demoJobs, type DemoJob } from './data/demo-jobs';
-import { demoStationCsv } from './data/demo-stations';
+
+import { type QueryInterface, QueryTypes, type Transaction } from 'sequelize';
+
 import { analyseFor } from '../server/services/station-service';
 import { putObject } from '../server/storage/s3';
+import { DEFAULT_RUBRIC } from '../shared/default-rubric';
+import { type DemoJob, demoJobs } from './data/demo-jobs';
+import { DEMO_PEOPLE } from './data/demo-people';
+import { demoStationCsv } from './data/demo-stations';
 
 // Demo jobs that carry a station coordinate file (by position in the demo list).
 const WITH_STATION_FILE = new Set([102, 108, 109, 114]);
@@ -37,7 +39,13 @@ export async function up(queryInterface: QueryInterface) {
   await db.transaction(async (transaction) => {
     for (const job of fresh) {
       const index = jobs.indexOf(job);
-      await insertJob(queryInterface, transaction, job, { technicians, reviewers, managerId, rubricId: rubric.id, now }, WITH_STATION_FILE.has(index) ? index : null);
+      await insertJob(
+        queryInterface,
+        transaction,
+        job,
+        { technicians, reviewers, managerId, rubricId: rubric.id, now },
+        WITH_STATION_FILE.has(index) ? index : null,
+      );
     }
   });
 }
@@ -49,60 +57,172 @@ async function insertJob(queryInterface: QueryInterface, transaction: Transactio
   const technicianId = ids.technicians[job.technicianIndex];
   const latest = job.revisions.at(-1);
   const created = new Date(new Date(`${job.lossDate}T09:00:00Z`).getTime() + 86_400_000);
-  await queryInterface.bulkInsert('jobs', [{
-    claim_reference: job.claimReference, street: job.street, city: job.city, postcode: job.postcode,
-    property_type: job.propertyType, loss_type: job.lossType, loss_date: job.lossDate, site_visit_date: job.siteVisitDate,
-    due_at: job.dueAt, effective_due_at: new Date(job.dueAt.getTime() + job.pausedMs), paused_at: job.pausedAt, paused_ms: job.pausedMs,
-    current_revision: job.revisions.length, submitted_at: latest?.submittedAt ?? null, camera_class: latest?.record.cameraClass ?? null,
-    priority: job.priority, status: job.status, technician_id: technicianId, created_by_id: ids.managerId,
-    created_at: created, updated_at: ids.now,
-  }], { transaction });
-  const [{ id: jobId }] = await db.query<{ id: number }>('SELECT id FROM jobs WHERE claim_reference = ?', { replacements: [job.claimReference], type: QueryTypes.SELECT, transaction });
+  await queryInterface.bulkInsert(
+    'jobs',
+    [
+      {
+        claim_reference: job.claimReference,
+        street: job.street,
+        city: job.city,
+        postcode: job.postcode,
+        property_type: job.propertyType,
+        loss_type: job.lossType,
+        loss_date: job.lossDate,
+        site_visit_date: job.siteVisitDate,
+        due_at: job.dueAt,
+        effective_due_at: new Date(job.dueAt.getTime() + job.pausedMs),
+        paused_at: job.pausedAt,
+        paused_ms: job.pausedMs,
+        current_revision: job.revisions.length,
+        submitted_at: latest?.submittedAt ?? null,
+        camera_class: latest?.record.cameraClass ?? null,
+        priority: job.priority,
+        status: job.status,
+        technician_id: technicianId,
+        created_by_id: ids.managerId,
+        created_at: created,
+        updated_at: ids.now,
+      },
+    ],
+    { transaction },
+  );
+  const [{ id: jobId }] = await db.query<{ id: number }>('SELECT id FROM jobs WHERE claim_reference = ?', {
+    replacements: [job.claimReference],
+    type: QueryTypes.SELECT,
+    transaction,
+  });
 
   const events: object[] = [
-    { job_id: jobId, actor_id: ids.managerId, type: 'created', data: JSON.stringify({ claimReference: job.claimReference }), created_at: created },
+    {
+      job_id: jobId,
+      actor_id: ids.managerId,
+      type: 'created',
+      data: JSON.stringify({ claimReference: job.claimReference }),
+      created_at: created,
+    },
     { job_id: jobId, actor_id: ids.managerId, type: 'assigned', data: JSON.stringify({ technicianId }), created_at: created },
   ];
-  await queryInterface.bulkInsert('capture_drafts', [{ job_id: jobId, data: JSON.stringify(job.draft), version: 1, created_at: created, updated_at: ids.now }], { transaction });
-  const stationFile = stationSeed === null ? null : await storeStationFile(queryInterface, transaction, jobId, technicianId, demoStationCsv(job.draft, stationSeed), created);
+  await queryInterface.bulkInsert(
+    'capture_drafts',
+    [{ job_id: jobId, data: JSON.stringify(job.draft), version: 1, created_at: created, updated_at: ids.now }],
+    { transaction },
+  );
+  const stationFile =
+    stationSeed === null
+      ? null
+      : await storeStationFile(queryInterface, transaction, jobId, technicianId, demoStationCsv(job.draft, stationSeed), created);
   for (const [n, revision] of job.revisions.entries()) {
-    await queryInterface.bulkInsert('capture_revisions', [{
-      job_id: jobId, number: n + 1, data: JSON.stringify(revision.record), files: JSON.stringify(stationFile ? [stationFile.view] : []),
-      findings: JSON.stringify({ missing: [], warnings: [] }), submitted_by_id: technicianId, submitted_at: revision.submittedAt,
-      station_analysis: stationFile ? JSON.stringify(analyseFor(revision.record, stationFile.text)) : null,
-    }], { transaction });
-    events.push({ job_id: jobId, actor_id: technicianId, type: 'submitted', data: JSON.stringify({ revision: n + 1, warnings: 0 }), created_at: revision.submittedAt });
+    await queryInterface.bulkInsert(
+      'capture_revisions',
+      [
+        {
+          job_id: jobId,
+          number: n + 1,
+          data: JSON.stringify(revision.record),
+          files: JSON.stringify(stationFile ? [stationFile.view] : []),
+          findings: JSON.stringify({ missing: [], warnings: [] }),
+          submitted_by_id: technicianId,
+          submitted_at: revision.submittedAt,
+          station_analysis: stationFile ? JSON.stringify(analyseFor(revision.record, stationFile.text)) : null,
+        },
+      ],
+      { transaction },
+    );
+    events.push({
+      job_id: jobId,
+      actor_id: technicianId,
+      type: 'submitted',
+      data: JSON.stringify({ revision: n + 1, warnings: 0 }),
+      created_at: revision.submittedAt,
+    });
   }
 
   let firstAcceptedId: number | null = null;
   for (const review of job.reviews) {
     const reviewerId = ids.reviewers[review.reviewerIndex];
-    await queryInterface.bulkInsert('reviews', [{
-      job_id: jobId, revision_number: review.revision, reviewer_id: reviewerId, rubric_id: ids.rubricId, kind: review.kind,
-      score: review.score, passed: review.passed, decision: review.decision, claimed_at: review.claimedAt, decided_at: review.decidedAt, due_at: job.dueAt,
-    }], { transaction });
+    await queryInterface.bulkInsert(
+      'reviews',
+      [
+        {
+          job_id: jobId,
+          revision_number: review.revision,
+          reviewer_id: reviewerId,
+          rubric_id: ids.rubricId,
+          kind: review.kind,
+          score: review.score,
+          passed: review.passed,
+          decision: review.decision,
+          claimed_at: review.claimedAt,
+          decided_at: review.decidedAt,
+          due_at: job.dueAt,
+        },
+      ],
+      { transaction },
+    );
     const [{ id: reviewId }] = await db.query<{ id: number }>('SELECT LAST_INSERT_ID() AS id', { type: QueryTypes.SELECT, transaction });
-    await queryInterface.bulkInsert('review_scores', review.scores.map((s) => ({
-      review_id: reviewId, criterion_key: s.key, score: s.score, max_score: s.maxScore, stock_reason: s.stockReason, comment: s.comment, carried_over: false,
-    })), { transaction });
+    await queryInterface.bulkInsert(
+      'review_scores',
+      review.scores.map((s) => ({
+        review_id: reviewId,
+        criterion_key: s.key,
+        score: s.score,
+        max_score: s.maxScore,
+        stock_reason: s.stockReason,
+        comment: s.comment,
+        carried_over: false,
+      })),
+      { transaction },
+    );
     if (review.kind === 'primary') {
-      events.push({ job_id: jobId, actor_id: reviewerId, type: 'reviewed', data: JSON.stringify({ decision: review.decision, score: review.score, passed: review.passed, rubricVersion: 1, revision: review.revision }), created_at: review.decidedAt });
+      events.push({
+        job_id: jobId,
+        actor_id: reviewerId,
+        type: 'reviewed',
+        data: JSON.stringify({
+          decision: review.decision,
+          score: review.score,
+          passed: review.passed,
+          rubricVersion: 1,
+          revision: review.revision,
+        }),
+        created_at: review.decidedAt,
+      });
       if (review.decision === 'accept') firstAcceptedId = reviewId;
       if (review.decision === 'rework') {
         const failing = review.scores.filter((s) => s.score !== null && s.score < s.maxScore);
         const answered = job.revisions.length > review.revision;
-        await queryInterface.bulkInsert('rework_items', failing.map((s) => ({
-          review_id: reviewId, job_id: jobId, criterion_key: s.key, title: DEFAULT_RUBRIC.criteria.find((c) => c.key === s.key)!.title,
-          instruction: s.comment ?? '', stock_reason: s.stockReason, response: answered ? 'fixed' : null,
-          response_note: answered ? 'Corrected on the next revision (demo).' : null, responded_at: answered ? job.revisions[review.revision].submittedAt : null,
-        })), { transaction });
+        await queryInterface.bulkInsert(
+          'rework_items',
+          failing.map((s) => ({
+            review_id: reviewId,
+            job_id: jobId,
+            criterion_key: s.key,
+            title: DEFAULT_RUBRIC.criteria.find((c) => c.key === s.key)!.title,
+            instruction: s.comment ?? '',
+            stock_reason: s.stockReason,
+            response: answered ? 'fixed' : null,
+            response_note: answered ? 'Corrected on the next revision (demo).' : null,
+            responded_at: answered ? job.revisions[review.revision].submittedAt : null,
+          })),
+          { transaction },
+        );
       }
     } else if (firstAcceptedId !== null) {
       const firstReviewerIndex = (review.reviewerIndex + 2) % 3;
-      await queryInterface.bulkInsert('second_reviews', [{
-        job_id: jobId, revision_number: review.revision, first_review_id: firstAcceptedId, first_reviewer_id: ids.reviewers[firstReviewerIndex],
-        second_review_id: reviewId, created_at: review.decidedAt,
-      }], { transaction });
+      await queryInterface.bulkInsert(
+        'second_reviews',
+        [
+          {
+            job_id: jobId,
+            revision_number: review.revision,
+            first_review_id: firstAcceptedId,
+            first_reviewer_id: ids.reviewers[firstReviewerIndex],
+            second_review_id: reviewId,
+            created_at: review.decidedAt,
+          },
+        ],
+        { transaction },
+      );
     }
   }
   await queryInterface.bulkInsert('audit_events', events, { transaction });
@@ -110,7 +230,14 @@ async function insertJob(queryInterface: QueryInterface, transaction: Transactio
 
 // Puts the demo station file in object storage and records it. Without storage (the fake S3
 // not running) the job simply has no station file.
-async function storeStationFile(queryInterface: QueryInterface, transaction: Transaction, jobId: number, technicianId: number, text: string, at: Date) {
+async function storeStationFile(
+  queryInterface: QueryInterface,
+  transaction: Transaction,
+  jobId: number,
+  technicianId: number,
+  text: string,
+  at: Date,
+) {
   const buffer = Buffer.from(text);
   const sha256 = crypto.createHash('sha256').update(buffer).digest('hex');
   const storageKey = `jobs/${jobId}/demo-stations-${sha256.slice(0, 12)}`;
@@ -120,16 +247,44 @@ async function storeStationFile(queryInterface: QueryInterface, transaction: Tra
     console.warn(`demo station file for job ${jobId} not stored: object storage unreachable`);
     return null;
   }
-  await queryInterface.bulkInsert('files', [{
-    job_id: jobId, kind: 'station_coordinates', original_name: 'stations.csv', content_type: 'text/csv', size_bytes: buffer.length,
-    sha256, storage_key: storageKey, uploaded_by_id: technicianId, detached_at: null, created_at: at,
-  }], { transaction });
-  const [{ id }] = await queryInterface.sequelize.query<{ id: number }>('SELECT LAST_INSERT_ID() AS id', { type: QueryTypes.SELECT, transaction });
-  const view = { id, kind: 'station_coordinates', name: 'stations.csv', contentType: 'text/csv', sizeBytes: buffer.length, sha256, uploadedAt: at.toISOString() };
+  await queryInterface.bulkInsert(
+    'files',
+    [
+      {
+        job_id: jobId,
+        kind: 'station_coordinates',
+        original_name: 'stations.csv',
+        content_type: 'text/csv',
+        size_bytes: buffer.length,
+        sha256,
+        storage_key: storageKey,
+        uploaded_by_id: technicianId,
+        detached_at: null,
+        created_at: at,
+      },
+    ],
+    { transaction },
+  );
+  const [{ id }] = await queryInterface.sequelize.query<{ id: number }>('SELECT LAST_INSERT_ID() AS id', {
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  const view = {
+    id,
+    kind: 'station_coordinates',
+    name: 'stations.csv',
+    contentType: 'text/csv',
+    sizeBytes: buffer.length,
+    sha256,
+    uploadedAt: at.toISOString(),
+  };
   return { text, view };
 }
 
 export async function down(queryInterface: QueryInterface) {
   const refs = demoJobs().map((j) => j.claimReference);
-  await queryInterface.sequelize.query('DELETE FROM jobs WHERE claim_reference IN (:refs)', { replacements: { refs }, type: QueryTypes.DELETE });
+  await queryInterface.sequelize.query('DELETE FROM jobs WHERE claim_reference IN (:refs)', {
+    replacements: { refs },
+    type: QueryTypes.DELETE,
+  });
 }

@@ -1,14 +1,16 @@
 import fs from 'node:fs';
 import path from 'node:path';
+
+import connectSessionSequelize from 'connect-session-sequelize';
 import express from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
-import connectSessionSequelize from 'connect-session-sequelize';
-import { config } from './config';
+
 import { passport } from './auth/passport';
-import { sequelize } from './models';
+import { config } from './config';
 import { requireSameOrigin } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { sequelize } from './models';
 import { apiRouters } from './routes';
 
 const SequelizeStore = connectSessionSequelize(session.Store);

@@ -1,4 +1,5 @@
 import { Sequelize } from 'sequelize';
+
 import { config } from './config';
 
 export const sequelize = new Sequelize(config.db.name, config.db.user, config.db.password, {

@@ -1,5 +1,5 @@
-import { config } from './config';
 import { createApp } from './app';
+import { config } from './config';
 import { sequelize } from './models';
 import { startOutboxWorker } from './workers/outbox-worker';
 

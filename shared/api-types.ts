@@ -25,7 +25,14 @@ export type JobDetail = {
 };
 
 // GET /api/jobs/:id/revisions/:n
-export type RevisionView = { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult; stationAnalysis: StationAnalysis | null };
+export type RevisionView = {
+  number: number;
+  submittedAt: string;
+  record: CaptureRecord;
+  files: StoredFile[];
+  findings: CheckResult;
+  stationAnalysis: StationAnalysis | null;
+};
 
 // POST /api/jobs/:id/reviews and /api/second-reviews/:id/reviews
 export type ReviewResult = { reviewId: number; score: number | null; passed: boolean; decision?: Decision; failedRules?: string[] };

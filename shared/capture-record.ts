@@ -1,7 +1,7 @@
 // The capture record: what a technician submits about a finished capture. Lengths are stored
 // in metres and areas in square metres, whatever unit the technician typed in.
-import type { LengthUnit } from './units';
 import type { LossType } from './jobs';
+import type { LengthUnit } from './units';
 
 export const CAMERA_CLASSES = ['tripod_depth', 'camera_360', 'handheld_lidar', 'laser_scanner'] as const;
 export type CameraClass = (typeof CAMERA_CLASSES)[number];
@@ -26,7 +26,10 @@ export const LEVEL_LABELS: Record<LevelKind, string> = {
 export const REFLECTIVE_KINDS = ['mirror', 'glass_door', 'glossy_panel', 'other'] as const;
 export type ReflectiveKind = (typeof REFLECTIVE_KINDS)[number];
 export const REFLECTIVE_LABELS: Record<ReflectiveKind, string> = {
-  mirror: 'Mirror', glass_door: 'Glass door', glossy_panel: 'Glossy panel', other: 'Other',
+  mirror: 'Mirror',
+  glass_door: 'Glass door',
+  glossy_panel: 'Glossy panel',
+  other: 'Other',
 };
 
 export const GLAZING_FLAGGED = ['yes', 'no', 'partly'] as const;

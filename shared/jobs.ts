@@ -1,5 +1,13 @@
 // Job vocabulary shared by client, server, migrations and seeders.
-export const JOB_STATUSES = ['draft', 'submitted', 'in_review', 'rework_requested', 'resubmitted', 'accepted', 'recapture_required'] as const;
+export const JOB_STATUSES = [
+  'draft',
+  'submitted',
+  'in_review',
+  'rework_requested',
+  'resubmitted',
+  'accepted',
+  'recapture_required',
+] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
 export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
@@ -27,7 +35,12 @@ export const PROPERTY_TYPE_LABELS: Record<PropertyType, string> = {
 export const LOSS_TYPES = ['water', 'fire', 'smoke', 'wind', 'hail', 'other'] as const;
 export type LossType = (typeof LOSS_TYPES)[number];
 export const LOSS_TYPE_LABELS: Record<LossType, string> = {
-  water: 'Water', fire: 'Fire', smoke: 'Smoke', wind: 'Wind', hail: 'Hail', other: 'Other',
+  water: 'Water',
+  fire: 'Fire',
+  smoke: 'Smoke',
+  wind: 'Wind',
+  hail: 'Hail',
+  other: 'Other',
 };
 
 export const PRIORITIES = ['normal', 'urgent', 'catastrophe'] as const;

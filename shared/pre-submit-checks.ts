@@ -1,16 +1,9 @@
 // Checks run before a capture record is submitted. The client shows them as the technician
 // types; the server runs the same function at submit and refuses when facts are missing.
 // Missing facts block submission; warnings do not.
-import {
-  CAMERA_CLASS_LABELS,
-  LEVEL_LABELS,
-  REFLECTIVE_LABELS,
-  roomAreaM2,
-  roomStationSum,
-  type CaptureRecord,
-} from './capture-record';
+import { CAMERA_CLASS_LABELS, type CaptureRecord, LEVEL_LABELS, REFLECTIVE_LABELS, roomAreaM2, roomStationSum } from './capture-record';
 import { expectedStations, MAX_STATION_SPACING_M } from './station-spacing';
-import { fromMetres, fromSquareMetres, roundTo, AREA_LABEL } from './units';
+import { AREA_LABEL, fromMetres, fromSquareMetres, roundTo } from './units';
 
 export type Finding = { field: string; message: string };
 export type CheckResult = { missing: Finding[]; warnings: Finding[] };
@@ -40,7 +33,8 @@ export function checkCaptureRecord(record: CaptureRecord): CheckResult {
   });
   record.models.forEach((model, i) => {
     if (!model.platformReference.trim()) need(`models.${i}.platformReference`, "Enter the model's reference on the capture platform.");
-    if (model.structure !== 'main_dwelling' && !model.splitReason) need(`models.${i}.splitReason`, 'Give the reason for splitting this model out.');
+    if (model.structure !== 'main_dwelling' && !model.splitReason)
+      need(`models.${i}.splitReason`, 'Give the reason for splitting this model out.');
   });
   record.damageAreas.forEach((area, i) => {
     if (!area.description.trim()) need(`damageAreas.${i}.description`, 'Describe the damage.');
@@ -65,7 +59,8 @@ export function checkCaptureRecord(record: CaptureRecord): CheckResult {
         );
       }
     }
-    if (!room.doorwayStation) warn(`rooms.${i}.doorwayStation`, `${label}: no station in the doorway, so registration to the next room is weaker.`);
+    if (!room.doorwayStation)
+      warn(`rooms.${i}.doorwayStation`, `${label}: no station in the doorway, so registration to the next room is weaker.`);
     room.reflective.forEach((surface, j) => {
       if (surface.found > surface.flagged) {
         warn(
@@ -82,7 +77,10 @@ export function checkCaptureRecord(record: CaptureRecord): CheckResult {
         ? record.exteriorStations
         : record.rooms.filter((r) => r.level === level.level).reduce((s, r) => s + r.stations, 0);
     if (level.stations !== inRooms) {
-      warn(`levels.${level.level}`, `${LEVEL_LABELS[level.level]}: ${level.stations} stations listed for the level, ${inRooms} in its rooms.`);
+      warn(
+        `levels.${level.level}`,
+        `${LEVEL_LABELS[level.level]}: ${level.stations} stations listed for the level, ${inRooms} in its rooms.`,
+      );
     }
   }
 

@@ -3,7 +3,18 @@ import { CAMERA_CLASSES } from './capture-record';
 import { LOSS_TYPES, PRIORITIES } from './jobs';
 import { QUEUE_SORTS, QUEUE_STATUSES } from './review';
 
-export const QUEUE_PARAM_KEYS = ['status', 'technicianId', 'lossType', 'priority', 'cameraClass', 'submission', 'claimedByMe', 'sort', 'dir', 'page'] as const;
+export const QUEUE_PARAM_KEYS = [
+  'status',
+  'technicianId',
+  'lossType',
+  'priority',
+  'cameraClass',
+  'submission',
+  'claimedByMe',
+  'sort',
+  'dir',
+  'page',
+] as const;
 export type QueueParams = Partial<Record<(typeof QUEUE_PARAM_KEYS)[number], string>>;
 
 const VALID: Partial<Record<keyof QueueParams, (v: string) => boolean>> = {

@@ -2,7 +2,7 @@
 // the server (which decides). Pure: no React, no Express, no database.
 import type { CaptureRecord } from './capture-record';
 import type { Decision, ScoreInput } from './review';
-import { criterionApplies, type Criterion, type RubricDefinition, scaleMax } from './rubric';
+import { type Criterion, criterionApplies, type RubricDefinition, scaleMax } from './rubric';
 import { type Evaluation, isBelowFullMarks, type ScoreSheet } from './scoring';
 
 export type FieldProblems = Record<string, string>;
@@ -20,11 +20,16 @@ export function applicability(criteria: Criterion[], record: CaptureRecord): Rec
 
 // Checks a score sheet against the rubric and the record; field names follow the form
 // (`scores.<key>`, `scores.<key>.comment`, `scores.<key>.stockReason`).
-export function validateScores(criteria: Criterion[], record: CaptureRecord, scores: ScoreInput[]): { fields: FieldProblems; sheet: ScoreSheet } {
+export function validateScores(
+  criteria: Criterion[],
+  record: CaptureRecord,
+  scores: ScoreInput[],
+): { fields: FieldProblems; sheet: ScoreSheet } {
   const fields: FieldProblems = {};
   const byKey = new Map(scores.map((s) => [s.key, s]));
   const applies = applicability(criteria, record);
-  for (const extra of scores.filter((s) => !criteria.some((c) => c.key === s.key))) fields[`scores.${extra.key}`] = 'Not a criterion of this rubric';
+  for (const extra of scores.filter((s) => !criteria.some((c) => c.key === s.key)))
+    fields[`scores.${extra.key}`] = 'Not a criterion of this rubric';
   for (const criterion of criteria) {
     const field = `scores.${criterion.key}`;
     const input = byKey.get(criterion.key);
@@ -44,13 +49,16 @@ export function validateScores(criteria: Criterion[], record: CaptureRecord, sco
     if (input.stockReason && !criterion.stockReasons.includes(input.stockReason)) fields[`${field}.stockReason`] = 'Choose a listed reason';
     if (isBelowFullMarks(criterion, input.score) && !input.comment.trim()) fields[`${field}.comment`] = 'Explain what falls short';
   }
-  const sheet: ScoreSheet = Object.fromEntries(criteria.map((c) => [c.key, applies[c.key] ? (byKey.get(c.key)?.score ?? undefined) : null]));
+  const sheet: ScoreSheet = Object.fromEntries(
+    criteria.map((c) => [c.key, applies[c.key] ? (byKey.get(c.key)?.score ?? undefined) : null]),
+  );
   return { fields, sheet };
 }
 
 // A failing score can be sent back or recaptured, never accepted.
 export function decisionProblem(decision: Decision, evaluation: Evaluation): string | null {
-  if (decision === 'accept' && evaluation.complete && !evaluation.passed) return `A failing review cannot be accepted: ${evaluation.failedRules.join(' ')}`;
+  if (decision === 'accept' && evaluation.complete && !evaluation.passed)
+    return `A failing review cannot be accepted: ${evaluation.failedRules.join(' ')}`;
   return null;
 }
 

@@ -1,10 +1,10 @@
 // Shapes shared by the review API and screens.
-import type { CaptureRecord, CameraClass } from './capture-record';
+import type { CameraClass, CaptureRecord } from './capture-record';
 import type { StoredFile } from './files';
 import type { JobStatus, LossType, Priority, PropertyType } from './jobs';
 import type { CheckResult } from './pre-submit-checks';
-import type { Rubric } from './rubric';
 import type { Change } from './revision-diff';
+import type { Rubric } from './rubric';
 import type { StationAnalysis } from './station-analysis';
 
 export const DECISIONS = ['accept', 'rework', 'recapture'] as const;
@@ -58,7 +58,14 @@ export type ScoreInput = { key: string; score: number | null; stockReason: strin
 
 export type Workspace = {
   job: QueueRow & { street: string; city: string };
-  revision: { number: number; submittedAt: string; record: CaptureRecord; files: StoredFile[]; findings: CheckResult; stationAnalysis: StationAnalysis | null };
+  revision: {
+    number: number;
+    submittedAt: string;
+    record: CaptureRecord;
+    files: StoredFile[];
+    findings: CheckResult;
+    stationAnalysis: StationAnalysis | null;
+  };
   rubric: Rubric;
   applicable: Record<string, boolean>;
   claimExpiresAt: string | null;

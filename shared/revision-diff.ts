@@ -21,13 +21,20 @@ function label(item: Record<string, unknown>) {
   return String(item.name || item.location || item.description || item.platformReference || item.key);
 }
 
-function compareObjects(section: string, prefix: string, before: Record<string, unknown>, after: Record<string, unknown>, changes: Change[]) {
+function compareObjects(
+  section: string,
+  prefix: string,
+  before: Record<string, unknown>,
+  after: Record<string, unknown>,
+  changes: Change[],
+) {
   const fields = new Set([...Object.keys(before), ...Object.keys(after)]);
   for (const field of fields) {
     if (field === 'key') continue;
     const a = before[field];
     const b = after[field];
-    if (JSON.stringify(a) !== JSON.stringify(b)) changes.push({ section, path: `${prefix}.${field}`, kind: 'changed', before: show(a), after: show(b) });
+    if (JSON.stringify(a) !== JSON.stringify(b))
+      changes.push({ section, path: `${prefix}.${field}`, kind: 'changed', before: show(a), after: show(b) });
   }
 }
 
@@ -37,15 +44,25 @@ export function diffRevisions(previous: Side, next: Side): Change[] {
   const n = next.record;
 
   for (const field of SCALARS) {
-    if (JSON.stringify(p[field]) !== JSON.stringify(n[field])) changes.push({ section: field, path: field, kind: 'changed', before: show(p[field]), after: show(n[field]) });
+    if (JSON.stringify(p[field]) !== JSON.stringify(n[field]))
+      changes.push({ section: field, path: field, kind: 'changed', before: show(p[field]), after: show(n[field]) });
   }
 
   const levels = (r: CaptureRecord) => Object.fromEntries(r.levels.map((l) => [l.level, l.stations]));
   const [pl, nl] = [levels(p), levels(n)];
   for (const level of new Set([...Object.keys(pl), ...Object.keys(nl)])) {
-    if (!(level in pl)) changes.push({ section: 'levels', path: `levels.${level}`, kind: 'added', before: '—', after: `${nl[level]} stations` });
-    else if (!(level in nl)) changes.push({ section: 'levels', path: `levels.${level}`, kind: 'removed', before: `${pl[level]} stations`, after: '—' });
-    else if (pl[level] !== nl[level]) changes.push({ section: 'levels', path: `levels.${level}`, kind: 'changed', before: `${pl[level]} stations`, after: `${nl[level]} stations` });
+    if (!(level in pl))
+      changes.push({ section: 'levels', path: `levels.${level}`, kind: 'added', before: '—', after: `${nl[level]} stations` });
+    else if (!(level in nl))
+      changes.push({ section: 'levels', path: `levels.${level}`, kind: 'removed', before: `${pl[level]} stations`, after: '—' });
+    else if (pl[level] !== nl[level])
+      changes.push({
+        section: 'levels',
+        path: `levels.${level}`,
+        kind: 'changed',
+        before: `${pl[level]} stations`,
+        after: `${nl[level]} stations`,
+      });
   }
 
   for (const list of KEYED_LISTS) {
@@ -67,8 +84,10 @@ export function diffRevisions(previous: Side, next: Side): Change[] {
 
   const beforeFiles = new Map(previous.files.map((f) => [f.id, f.name]));
   const afterFiles = new Map(next.files.map((f) => [f.id, f.name]));
-  for (const [id, name] of afterFiles) if (!beforeFiles.has(id)) changes.push({ section: 'files', path: `files.${id}`, kind: 'added', before: '—', after: name });
-  for (const [id, name] of beforeFiles) if (!afterFiles.has(id)) changes.push({ section: 'files', path: `files.${id}`, kind: 'removed', before: name, after: '—' });
+  for (const [id, name] of afterFiles)
+    if (!beforeFiles.has(id)) changes.push({ section: 'files', path: `files.${id}`, kind: 'added', before: '—', after: name });
+  for (const [id, name] of beforeFiles)
+    if (!afterFiles.has(id)) changes.push({ section: 'files', path: `files.${id}`, kind: 'removed', before: name, after: '—' });
 
   return changes;
 }

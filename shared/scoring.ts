@@ -3,7 +3,7 @@
 //   (not-applicable criteria drop out and the rest are renormalised), one decimal, half up.
 //   pass  = score ≥ pass mark AND no critical criterion at its lowest level.
 // The arithmetic is done in integers so that rounding half up is exact (84.95 → 85.0).
-import { scaleMax, type Criterion, type RubricDefinition } from './rubric';
+import { type Criterion, type RubricDefinition, scaleMax } from './rubric';
 
 // null = not applicable; undefined = not scored yet.
 export type ScoreSheet = Record<string, number | null | undefined>;
@@ -41,7 +41,8 @@ export function evaluate(rubric: RubricDefinition, sheet: ScoreSheet): Evaluatio
   const score = weightedScore(rubric.criteria, sheet);
   const criticalFailures = rubric.criteria.filter((c) => c.critical && sheet[c.key] === 0).map((c) => c.title);
   const failedRules: string[] = [];
-  if (score !== null && score < rubric.passMark) failedRules.push(`Score ${score.toFixed(1)} is below the pass mark of ${rubric.passMark}.`);
+  if (score !== null && score < rubric.passMark)
+    failedRules.push(`Score ${score.toFixed(1)} is below the pass mark of ${rubric.passMark}.`);
   for (const title of criticalFailures) failedRules.push(`Critical criterion "${title}" is at its lowest level.`);
   return {
     complete: missing.length === 0,

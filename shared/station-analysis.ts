@@ -9,14 +9,30 @@
 //    (Clark & Evans 1954, Ecology 35:445–453).
 // Supplementary panoramas are not registered, so they are counted but left out of all checks.
 import { Delaunay } from 'd3-delaunay';
+
 import { LEVEL_KINDS, type LevelKind } from './capture-record';
 import type { StationPoint } from './station-file';
 import { expectedStations } from './station-spacing';
 
 export type NearestNeighbour = { station: number; neighbour: number | null; distance: number | null };
 export type ChainLink = { station: number; from: number | null; distance: number | null; weak: boolean };
-export type RoomDensity = { room: string; stations: number; areaM2: number | null; perTenSquareMetres: number | null; expected: number | null; short: boolean };
-export type ClarkEvans = { n: number; areaM2: number; observedMean: number; expectedMean: number; standardError: number; r: number; z: number };
+export type RoomDensity = {
+  room: string;
+  stations: number;
+  areaM2: number | null;
+  perTenSquareMetres: number | null;
+  expected: number | null;
+  short: boolean;
+};
+export type ClarkEvans = {
+  n: number;
+  areaM2: number;
+  observedMean: number;
+  expectedMean: number;
+  standardError: number;
+  r: number;
+  z: number;
+};
 
 export type LevelAnalysis = {
   level: LevelKind;
@@ -48,19 +64,37 @@ export function nearestNeighbours(points: StationPoint[]): NearestNeighbour[] {
   if (points.length < 2) return points.map((p) => ({ station: p.number, neighbour: null, distance: null }));
   if (points.length === 2) {
     const d = distance(points[0], points[1]);
-    return [{ station: points[0].number, neighbour: points[1].number, distance: d }, { station: points[1].number, neighbour: points[0].number, distance: d }];
+    return [
+      { station: points[0].number, neighbour: points[1].number, distance: d },
+      { station: points[1].number, neighbour: points[0].number, distance: d },
+    ];
   }
-  const delaunay = Delaunay.from(points, (p) => p.x, (p) => p.y);
+  const delaunay = Delaunay.from(
+    points,
+    (p) => p.x,
+    (p) => p.y,
+  );
   return points.map((p, i) => {
     let best = -1;
     let bestD = Infinity;
     for (const j of delaunay.neighbors(i)) {
       const d = distance(p, points[j]);
-      if (d < bestD) { bestD = d; best = j; }
+      if (d < bestD) {
+        bestD = d;
+        best = j;
+      }
     }
     // Collinear or coincident input leaves no triangulation; fall back to a scan.
     if (best < 0) {
-      points.forEach((q, j) => { if (j !== i) { const d = distance(p, q); if (d < bestD) { bestD = d; best = j; } } });
+      points.forEach((q, j) => {
+        if (j !== i) {
+          const d = distance(p, q);
+          if (d < bestD) {
+            bestD = d;
+            best = j;
+          }
+        }
+      });
     }
     return { station: p.number, neighbour: points[best].number, distance: bestD };
   });
@@ -71,7 +105,11 @@ export function nearestNeighbours(points: StationPoint[]): NearestNeighbour[] {
 export function registrationChain(points: StationPoint[], maxSpacingM: number | null): ChainLink[] {
   const ordered = [...points].sort((a, b) => a.number - b.number);
   if (ordered.length === 0) return [];
-  const spread = Math.max(...ordered.map((p) => p.x)) - Math.min(...ordered.map((p) => p.x)) + Math.max(...ordered.map((p) => p.y)) - Math.min(...ordered.map((p) => p.y));
+  const spread =
+    Math.max(...ordered.map((p) => p.x)) -
+    Math.min(...ordered.map((p) => p.x)) +
+    Math.max(...ordered.map((p) => p.y)) -
+    Math.min(...ordered.map((p) => p.y));
   const cell = Math.max(maxSpacingM ?? 0, spread / Math.sqrt(ordered.length), 1e-6);
   const grid = new Map<string, StationPoint[]>();
   const key = (cx: number, cy: number) => `${cx},${cy}`;
@@ -89,13 +127,17 @@ export function registrationChain(points: StationPoint[], maxSpacingM: number | 
           if (Math.max(Math.abs(dx), Math.abs(dy)) !== ring) continue;
           for (const q of grid.get(key(cx + dx, cy + dy)) ?? []) {
             const d = distance(p, q);
-            if (d < bestD) { bestD = d; best = q; }
+            if (d < bestD) {
+              bestD = d;
+              best = q;
+            }
           }
         }
       }
     }
     const bucket = grid.get(key(cx, cy));
-    if (bucket) bucket.push(p); else grid.set(key(cx, cy), [p]);
+    if (bucket) bucket.push(p);
+    else grid.set(key(cx, cy), [p]);
     const from = best as StationPoint | null;
     return {
       station: p.number,
@@ -110,7 +152,15 @@ export function clarkEvans(observedMean: number, n: number, areaM2: number): Cla
   const density = n / areaM2;
   const expectedMean = 0.5 / Math.sqrt(density);
   const standardError = 0.26136 / Math.sqrt(n * density);
-  return { n, areaM2, observedMean, expectedMean, standardError, r: observedMean / expectedMean, z: (observedMean - expectedMean) / standardError };
+  return {
+    n,
+    areaM2,
+    observedMean,
+    expectedMean,
+    standardError,
+    r: observedMean / expectedMean,
+    z: (observedMean - expectedMean) / standardError,
+  };
 }
 
 const median = (values: number[]) => {
@@ -140,37 +190,68 @@ export function analyseLevel(level: LevelKind, all: StationPoint[], options: Ana
     const count = registered.filter((s) => s.room === name).length;
     const areaM2 = options.rooms?.find((r) => r.name.trim().toLowerCase() === name.trim().toLowerCase())?.areaM2 ?? null;
     const expected = areaM2 !== null && max !== null ? expectedStations(areaM2, max) : null;
-    return { room: name, stations: count, areaM2, perTenSquareMetres: areaM2 ? (count / areaM2) * 10 : null, expected, short: expected !== null && count < expected };
+    return {
+      room: name,
+      stations: count,
+      areaM2,
+      perTenSquareMetres: areaM2 ? (count / areaM2) * 10 : null,
+      expected,
+      short: expected !== null && count < expected,
+    };
   });
 
   return {
-    level, stations: all, registered: registered.length, panoramas: all.length - registered.length, nearest,
+    level,
+    stations: all,
+    registered: registered.length,
+    panoramas: all.length - registered.length,
+    nearest,
     spacing: { mean, median: median(distances), max: distances.length ? Math.max(...distances) : null },
     sparse: max === null ? [] : nearest.filter((n) => n.distance !== null && n.distance > max + 1e-9).map((n) => n.station),
-    chain, weakLinks: chain.filter((c) => c.weak), rooms, clarkEvans: ce,
+    chain,
+    weakLinks: chain.filter((c) => c.weak),
+    rooms,
+    clarkEvans: ce,
   };
 }
 
 export function analyseStations(stations: StationPoint[], options: AnalysisOptions): StationAnalysis {
   const levels = LEVEL_KINDS.filter((level) => stations.some((s) => s.level === level));
-  return { maxSpacingM: options.maxSpacingM, levels: levels.map((level) => analyseLevel(level, stations.filter((s) => s.level === level), options)) };
+  return {
+    maxSpacingM: options.maxSpacingM,
+    levels: levels.map((level) =>
+      analyseLevel(
+        level,
+        stations.filter((s) => s.level === level),
+        options,
+      ),
+    ),
+  };
 }
 
 // Findings offered to the reviewer as starting comments; nothing is scored automatically.
-export function suggestedComments(analysis: StationAnalysis, unit: 'ft' | 'm', levelLabel: (l: LevelKind) => string): Record<'spacing' | 'registration', string[]> {
+export function suggestedComments(
+  analysis: StationAnalysis,
+  unit: 'ft' | 'm',
+  levelLabel: (l: LevelKind) => string,
+): Record<'spacing' | 'registration', string[]> {
   const show = (m: number) => (unit === 'm' ? `${m.toFixed(1)} m` : `${(m / 0.3048).toFixed(1)} ft`);
   const spacing: string[] = [];
   const registration: string[] = [];
   for (const level of analysis.levels) {
     const name = levelLabel(level.level);
     if (level.sparse.length && analysis.maxSpacingM !== null) {
-      spacing.push(`${name}: station${level.sparse.length > 1 ? 's' : ''} ${level.sparse.map((n) => `#${n}`).join(', ')} ${level.sparse.length > 1 ? 'are' : 'is'} more than ${show(analysis.maxSpacingM)} from the nearest station.`);
+      spacing.push(
+        `${name}: station${level.sparse.length > 1 ? 's' : ''} ${level.sparse.map((n) => `#${n}`).join(', ')} ${level.sparse.length > 1 ? 'are' : 'is'} more than ${show(analysis.maxSpacingM)} from the nearest station.`,
+      );
     }
     for (const room of level.rooms.filter((r) => r.short)) {
       spacing.push(`${name}, ${room.room}: ${room.stations} station(s) where about ${room.expected} are expected for its area.`);
     }
     for (const link of level.weakLinks) {
-      registration.push(`${name}: station #${link.station} is ${show(link.distance!)} from the nearest earlier station (#${link.from}); check that it registered in the right place.`);
+      registration.push(
+        `${name}: station #${link.station} is ${show(link.distance!)} from the nearest earlier station (#${link.from}); check that it registered in the right place.`,
+      );
     }
   }
   return { spacing, registration };

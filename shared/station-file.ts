@@ -7,8 +7,9 @@
 //   room     optional room name, as in the capture record
 //   kind     station (registered) or panorama (supplementary, not registered)
 import Papa from 'papaparse';
+
 import { LEVEL_KINDS, type LevelKind } from './capture-record';
-import { toMetres, type LengthUnit } from './units';
+import { type LengthUnit, toMetres } from './units';
 
 export const STATION_KINDS = ['station', 'panorama'] as const;
 export type StationKind = (typeof STATION_KINDS)[number];
@@ -51,16 +52,20 @@ export function parseStationFile(text: string): { stations: StationPoint[]; prob
 
     const stationRaw = need('station');
     const number = Number(stationRaw);
-    if (stationRaw && (!Number.isInteger(number) || number < 1)) rowProblems.push({ line, column: 'station', message: `Not a station number: "${stationRaw}"` });
-    else if (stationRaw && seen.has(number)) rowProblems.push({ line, column: 'station', message: `Duplicate station number ${number} (first on line ${seen.get(number)})` });
+    if (stationRaw && (!Number.isInteger(number) || number < 1))
+      rowProblems.push({ line, column: 'station', message: `Not a station number: "${stationRaw}"` });
+    else if (stationRaw && seen.has(number))
+      rowProblems.push({ line, column: 'station', message: `Duplicate station number ${number} (first on line ${seen.get(number)})` });
     const level = need('level');
-    if (level && !(LEVEL_KINDS as readonly string[]).includes(level)) rowProblems.push({ line, column: 'level', message: `Unknown level "${level}"` });
+    if (level && !(LEVEL_KINDS as readonly string[]).includes(level))
+      rowProblems.push({ line, column: 'level', message: `Unknown level "${level}"` });
     const x = numberIn('x');
     const y = numberIn('y');
     const unit = need('unit');
     if (unit && unit !== 'ft' && unit !== 'm') rowProblems.push({ line, column: 'unit', message: `Unknown unit "${unit}" (use ft or m)` });
     const kind = need('kind');
-    if (kind && !(STATION_KINDS as readonly string[]).includes(kind)) rowProblems.push({ line, column: 'kind', message: `Unknown kind "${kind}" (use station or panorama)` });
+    if (kind && !(STATION_KINDS as readonly string[]).includes(kind))
+      rowProblems.push({ line, column: 'kind', message: `Unknown kind "${kind}" (use station or panorama)` });
 
     if (rowProblems.length) {
       problems.push(...rowProblems);
@@ -68,8 +73,12 @@ export function parseStationFile(text: string): { stations: StationPoint[]; prob
     }
     seen.set(number, line);
     stations.push({
-      number, level: level as LevelKind, x: toMetres(x, unit as LengthUnit), y: toMetres(y, unit as LengthUnit),
-      room: value('room') || null, kind: kind as StationKind,
+      number,
+      level: level as LevelKind,
+      x: toMetres(x, unit as LengthUnit),
+      y: toMetres(y, unit as LengthUnit),
+      room: value('room') || null,
+      kind: kind as StationKind,
     });
   });
   if (!problems.length && stations.length === 0) problems.push({ line: 2, column: 'station', message: 'The file has no stations' });

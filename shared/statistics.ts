@@ -33,13 +33,15 @@ export function pChart(points: PChartPoint[]): { centre: number | null; rows: PC
   const totalN = points.reduce((s, p) => s + p.n, 0);
   if (totalN === 0) return { centre: null, rows: [] };
   const centre = points.reduce((s, p) => s + p.defects, 0) / totalN;
-  const rows = points.filter((p) => p.n > 0).map((point) => {
-    const sigma = Math.sqrt((centre * (1 - centre)) / point.n);
-    const lcl = Math.max(0, centre - 3 * sigma);
-    const ucl = Math.min(1, centre + 3 * sigma);
-    const p = point.defects / point.n;
-    return { ...point, p, lcl, ucl, outside: p > ucl ? ('above' as const) : p < lcl ? ('below' as const) : null };
-  });
+  const rows = points
+    .filter((p) => p.n > 0)
+    .map((point) => {
+      const sigma = Math.sqrt((centre * (1 - centre)) / point.n);
+      const lcl = Math.max(0, centre - 3 * sigma);
+      const ucl = Math.min(1, centre + 3 * sigma);
+      const p = point.defects / point.n;
+      return { ...point, p, lcl, ucl, outside: p > ucl ? ('above' as const) : p < lcl ? ('below' as const) : null };
+    });
   return { centre, rows };
 }
 
@@ -57,10 +59,15 @@ export function cohenKappa(table: number[][], weights: null | 'linear' | 'quadra
   const cols = p[0].map((_, j) => p.reduce((s, row) => s + row[j], 0));
   // Disagreement weight v_ij: 0 on the diagonal.
   const v = (i: number, j: number) =>
-    weights === null ? (i === j ? 0 : 1)
-    : weights === 'linear' ? Math.abs(i - j) / (k - 1)
-    : weights === 'quadratic' ? ((i - j) / (k - 1)) ** 2
-    : weights[i][j];
+    weights === null
+      ? i === j
+        ? 0
+        : 1
+      : weights === 'linear'
+        ? Math.abs(i - j) / (k - 1)
+        : weights === 'quadratic'
+          ? ((i - j) / (k - 1)) ** 2
+          : weights[i][j];
   let observedDisagreement = 0;
   let expectedDisagreement = 0;
   for (let i = 0; i < k; i++) {

@@ -1,6 +1,5 @@
 // Timeline events in words.
-import type { TimelineEvent } from './review';
-import { DECISION_LABELS, type Decision } from './review';
+import { type Decision, DECISION_LABELS, type TimelineEvent } from './review';
 
 const EMAIL_KIND: Record<string, string> = {
   rework_request: 'rework request',
@@ -12,20 +11,35 @@ const EMAIL_KIND: Record<string, string> = {
 export function describeEvent(event: Pick<TimelineEvent, 'type' | 'data'>): string {
   const d = event.data as Record<string, string | number | boolean | null>;
   switch (event.type) {
-    case 'created': return `Job created (${d.claimReference})`;
-    case 'assigned': return 'Assigned to the technician';
-    case 'reassigned': return 'Reassigned to another technician';
-    case 'submitted': return `Capture record submitted as revision ${d.revision}`;
-    case 'claimed': return 'Claimed for review';
-    case 'released': return 'Claim released';
-    case 'claim_reassigned': return 'Claim moved to another reviewer';
-    case 'reviewed': return `Reviewed: ${DECISION_LABELS[d.decision as Decision] ?? d.decision}, score ${d.score ?? '–'} (rubric version ${d.rubricVersion}, revision ${d.revision})`;
-    case 'blind_second_review': return `Blind second review of revision ${d.revision}`;
-    case 'email_queued': return `E-mail queued: ${EMAIL_KIND[String(d.kind)] ?? d.kind}`;
-    case 'email_sent': return `E-mail sent: ${EMAIL_KIND[String(d.kind)] ?? d.kind}`;
-    case 'email_failed': return `E-mail not sent yet (attempt ${d.attempt}); will retry`;
-    case 'rework_answered': return `Rework answered: "${d.title}", ${String(d.response).replace('_', ' ')}`;
-    case 'dispute_decided': return `Dispute on "${d.title}" ${d.outcome}`;
-    default: return event.type;
+    case 'created':
+      return `Job created (${d.claimReference})`;
+    case 'assigned':
+      return 'Assigned to the technician';
+    case 'reassigned':
+      return 'Reassigned to another technician';
+    case 'submitted':
+      return `Capture record submitted as revision ${d.revision}`;
+    case 'claimed':
+      return 'Claimed for review';
+    case 'released':
+      return 'Claim released';
+    case 'claim_reassigned':
+      return 'Claim moved to another reviewer';
+    case 'reviewed':
+      return `Reviewed: ${DECISION_LABELS[d.decision as Decision] ?? d.decision}, score ${d.score ?? '–'} (rubric version ${d.rubricVersion}, revision ${d.revision})`;
+    case 'blind_second_review':
+      return `Blind second review of revision ${d.revision}`;
+    case 'email_queued':
+      return `E-mail queued: ${EMAIL_KIND[String(d.kind)] ?? d.kind}`;
+    case 'email_sent':
+      return `E-mail sent: ${EMAIL_KIND[String(d.kind)] ?? d.kind}`;
+    case 'email_failed':
+      return `E-mail not sent yet (attempt ${d.attempt}); will retry`;
+    case 'rework_answered':
+      return `Rework answered: "${d.title}", ${String(d.response).replace('_', ' ')}`;
+    case 'dispute_decided':
+      return `Dispute on "${d.title}" ${d.outcome}`;
+    default:
+      return event.type;
   }
 }

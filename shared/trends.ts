@@ -36,7 +36,12 @@ export type TeamRow = {
   tooFew: boolean;
 };
 
-export type ReviewerRow = { reviewer: { id: number; name: string }; reviews: number; medianMinutesClaimToDecision: number | null; lateShare: number | null };
+export type ReviewerRow = {
+  reviewer: { id: number; name: string };
+  reviews: number;
+  medianMinutesClaimToDecision: number | null;
+  lateShare: number | null;
+};
 
 export type AgreementStat = { n: number; kappa: number | null; band: string | null; table: number[][] };
 

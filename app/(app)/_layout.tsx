@@ -1,4 +1,5 @@
 import { Redirect, Slot } from 'expo-router';
+
 import { useSessionQuery } from '@/components/queries/session';
 import { AppShell } from '@/components/shell/app-shell';
 import { Notice } from '@/components/ui/notice';

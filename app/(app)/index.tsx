@@ -1,6 +1,7 @@
 import { Redirect } from 'expo-router';
-import { homeFor } from '@/shared/navigation';
+
 import { useSessionQuery } from '@/components/queries/session';
+import { homeFor } from '@/shared/navigation';
 
 export default function Home() {
   const { data: user } = useSessionQuery();

@@ -1,6 +1,7 @@
 import { Redirect, Slot } from 'expo-router';
-import { homeFor } from '@/shared/navigation';
+
 import { useSessionQuery } from '@/components/queries/session';
+import { homeFor } from '@/shared/navigation';
 
 export default function AuthLayout() {
   const { data: user, isPending } = useSessionQuery();

@@ -1,14 +1,15 @@
 import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import { ROLES, ROLE_LABELS, type Role } from '@/shared/roles';
+
 import { ApiError } from '@/components/lib/api-client';
-import { useUserCreateMutation, type NewUser } from '@/components/queries/users';
+import { type NewUser, useUserCreateMutation } from '@/components/queries/users';
 import { Button } from '@/components/ui/button';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { colors, space } from '@/components/ui/theme';
+import { type Role, ROLE_LABELS, ROLES } from '@/shared/roles';
 
 const roleOptions = ROLES.map((value) => ({ value, label: ROLE_LABELS[value] }));
 
@@ -36,23 +37,58 @@ export function CreateUserForm() {
       {create.error instanceof ApiError && Object.keys(create.error.fields).length === 0 ? (
         <Notice tone="error">{create.error.message}</Notice>
       ) : null}
-      <Controller control={control} name="name" rules={{ required: 'Enter a name' }}
+      <Controller
+        control={control}
+        name="name"
+        rules={{ required: 'Enter a name' }}
         render={({ field, fieldState }) => (
           <TextField label="Full name" value={field.value} onChangeText={field.onChange} error={fieldState.error?.message} />
-        )} />
-      <Controller control={control} name="email" rules={{ required: 'Enter an e-mail address' }}
+        )}
+      />
+      <Controller
+        control={control}
+        name="email"
+        rules={{ required: 'Enter an e-mail address' }}
         render={({ field, fieldState }) => (
-          <TextField label="E-mail" autoCapitalize="none" inputMode="email" value={field.value} onChangeText={field.onChange} error={fieldState.error?.message} />
-        )} />
-      <Controller control={control} name="role"
+          <TextField
+            label="E-mail"
+            autoCapitalize="none"
+            inputMode="email"
+            value={field.value}
+            onChangeText={field.onChange}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="role"
         render={({ field, fieldState }) => (
-          <ChoiceField<Role> label="Role" options={roleOptions} value={field.value} onChange={field.onChange} error={fieldState.error?.message} />
-        )} />
-      <Controller control={control} name="password" rules={{ minLength: { value: 10, message: 'Use at least 10 characters' } }}
+          <ChoiceField<Role>
+            label="Role"
+            options={roleOptions}
+            value={field.value}
+            onChange={field.onChange}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="password"
+        rules={{ minLength: { value: 10, message: 'Use at least 10 characters' } }}
         render={({ field, fieldState }) => (
-          <TextField label="First password" hint="At least 10 characters; ask them to keep it private." secureTextEntry autoComplete="new-password"
-            value={field.value} onChangeText={field.onChange} error={fieldState.error?.message} />
-        )} />
+          <TextField
+            label="First password"
+            hint="At least 10 characters; ask them to keep it private."
+            secureTextEntry
+            autoComplete="new-password"
+            value={field.value}
+            onChangeText={field.onChange}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
       <Button label="Add user" onPress={submit} busy={create.isPending} />
     </View>
   );

@@ -1,10 +1,12 @@
 import { useWindowDimensions, View } from 'react-native';
+
 import { useSessionQuery } from '@/components/queries/session';
 import { useUsersQuery } from '@/components/queries/users';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+
 import { CreateUserForm } from './create-user-form';
 import { UsersTable } from './users-table';
 

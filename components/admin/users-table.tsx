@@ -1,13 +1,14 @@
 import { useMemo } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
-import type { UserRow } from '@/shared/api-types';
-import { ROLES, ROLE_LABELS } from '@/shared/roles';
+
 import { useUserUpdateMutation } from '@/components/queries/users';
 import { Badge } from '@/components/ui/badge';
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import type { UserRow } from '@/shared/api-types';
+import { ROLE_LABELS, ROLES } from '@/shared/roles';
 
 export function UsersTable({ users, currentUserId }: { users: UserRow[]; currentUserId: number }) {
   const update = useUserUpdateMutation();
@@ -74,8 +75,14 @@ export function UsersTable({ users, currentUserId }: { users: UserRow[]; current
   return (
     <View style={{ gap: space.sm }}>
       {update.error ? <Notice tone="error">{update.error.message}</Notice> : null}
-      <DataTable label="Users" columns={columns} data={users} emptyText="No users yet." getRowId={(u) => String(u.id)}
-        initialSorting={[{ id: 'name', desc: false }]} />
+      <DataTable
+        label="Users"
+        columns={columns}
+        data={users}
+        emptyText="No users yet."
+        getRowId={(u) => String(u.id)}
+        initialSorting={[{ id: 'name', desc: false }]}
+      />
     </View>
   );
 }
@@ -86,6 +93,13 @@ const styles = StyleSheet.create({
   roleSelected: { backgroundColor: colors.ink, borderColor: colors.ink },
   roleText: { fontFamily: fonts.regular, fontSize: 13, color: colors.ink },
   roleTextSelected: { color: colors.surface, fontFamily: fonts.semibold },
-  action: { borderWidth: 1, borderColor: colors.ink, borderRadius: 6, paddingHorizontal: space.md, paddingVertical: 6, alignSelf: 'flex-start' },
+  action: {
+    borderWidth: 1,
+    borderColor: colors.ink,
+    borderRadius: 6,
+    paddingHorizontal: space.md,
+    paddingVertical: 6,
+    alignSelf: 'flex-start',
+  },
   actionText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
 });

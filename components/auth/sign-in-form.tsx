@@ -1,5 +1,6 @@
 import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
+
 import { ApiError } from '@/components/lib/api-client';
 import { useSignInMutation } from '@/components/queries/session';
 import { Button } from '@/components/ui/button';

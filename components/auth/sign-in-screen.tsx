@@ -1,6 +1,8 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
+
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
+
 import { SignInForm } from './sign-in-form';
 
 export function SignInScreen() {
@@ -19,5 +21,16 @@ export function SignInScreen() {
 
 const styles = StyleSheet.create({
   page: { flexGrow: 1, justifyContent: 'center', alignItems: 'center', padding: space.lg, backgroundColor: colors.paper },
-  card: { width: '100%', maxWidth: 420, backgroundColor: colors.surface, borderRadius: 8, borderWidth: 1, borderColor: colors.line, borderTopWidth: 4, borderTopColor: colors.accent, padding: space.xl, gap: space.lg },
+  card: {
+    width: '100%',
+    maxWidth: 420,
+    backgroundColor: colors.surface,
+    borderRadius: 8,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderTopWidth: 4,
+    borderTopColor: colors.accent,
+    padding: space.xl,
+    gap: space.lg,
+  },
 });

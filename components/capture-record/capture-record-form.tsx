@@ -1,21 +1,23 @@
 import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
-import { checkCaptureRecord } from '@/shared/pre-submit-checks';
-import type { LengthUnit } from '@/shared/units';
+
 import { ApiError } from '@/components/lib/api-client';
 import { useRecordSaveMutation, useRecordSubmitMutation } from '@/components/queries/capture-record';
-import { type JobDetail } from '@/shared/api-types';
+import { StationSection } from '@/components/stations/station-section';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+import { type JobDetail } from '@/shared/api-types';
+import { checkCaptureRecord } from '@/shared/pre-submit-checks';
+import type { LengthUnit } from '@/shared/units';
+
 import { DamageSection } from './damage-section';
 import { FilesSection } from './files-section';
-import { StationSection } from '@/components/stations/station-section';
 import { FindingsPanel } from './findings-panel';
 import { RecordFormContext } from './form-context';
-import { toFormValues, toRecord, type FormValues } from './form-values';
+import { type FormValues, toFormValues, toRecord } from './form-values';
 import { GapsSection } from './gaps-section';
 import { LevelsSection } from './levels-section';
 import { ModelsSection } from './models-section';
@@ -75,7 +77,12 @@ export function CaptureRecordForm({ detail }: { detail: JobDetail }) {
     <RecordFormContext.Provider value={{ control: form.control, errors, unitLabel: values.units }}>
       <View style={[styles.layout, wide && styles.wideLayout]}>
         <View style={[styles.sections, wide && { flex: 2 }]} role="form" aria-label="Capture record">
-          <Text variant="muted" role="status" aria-live="polite" style={autosave.state.status === 'error' || autosave.state.status === 'blocked' ? { color: colors.fail } : undefined}>
+          <Text
+            variant="muted"
+            role="status"
+            aria-live="polite"
+            style={autosave.state.status === 'error' || autosave.state.status === 'blocked' ? { color: colors.fail } : undefined}
+          >
             {describeAutosave(autosave.state)}
           </Text>
           <CameraSection onUnitsChange={changeUnits} />

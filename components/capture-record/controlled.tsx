@@ -1,14 +1,28 @@
 // Form inputs wired to react-hook-form by field path, with errors from the record form.
 import { Controller, type FieldPath } from 'react-hook-form';
+
 import { Checkbox } from '@/components/ui/checkbox';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { TextField } from '@/components/ui/text-field';
-import type { FormValues } from './form-values';
+
 import { useRecordForm } from './form-context';
+import type { FormValues } from './form-values';
 
 type Name = FieldPath<FormValues>;
 
-export function TextInputField({ name, label, hint, numeric, multiline }: { name: Name; label: string; hint?: string; numeric?: 'decimal' | 'numeric'; multiline?: boolean }) {
+export function TextInputField({
+  name,
+  label,
+  hint,
+  numeric,
+  multiline,
+}: {
+  name: Name;
+  label: string;
+  hint?: string;
+  numeric?: 'decimal' | 'numeric';
+  multiline?: boolean;
+}) {
   const { control, errors } = useRecordForm();
   return (
     <Controller
@@ -32,13 +46,29 @@ export function TextInputField({ name, label, hint, numeric, multiline }: { name
   );
 }
 
-export function ChoiceInputField<T extends string>({ name, label, options }: { name: Name; label: string; options: { value: T; label: string }[] }) {
+export function ChoiceInputField<T extends string>({
+  name,
+  label,
+  options,
+}: {
+  name: Name;
+  label: string;
+  options: { value: T; label: string }[];
+}) {
   const { control, errors } = useRecordForm();
   return (
     <Controller
       control={control}
       name={name}
-      render={({ field }) => <ChoiceField<T> label={label} options={options} value={(field.value as T | null) ?? undefined} onChange={field.onChange} error={errors[name]} />}
+      render={({ field }) => (
+        <ChoiceField<T>
+          label={label}
+          options={options}
+          value={(field.value as T | null) ?? undefined}
+          onChange={field.onChange}
+          error={errors[name]}
+        />
+      )}
     />
   );
 }
@@ -52,7 +82,10 @@ export function YesNoField({ name, label }: { name: Name; label: string }) {
       render={({ field }) => (
         <ChoiceField<'yes' | 'no'>
           label={label}
-          options={[{ value: 'yes', label: 'Yes' }, { value: 'no', label: 'No' }]}
+          options={[
+            { value: 'yes', label: 'Yes' },
+            { value: 'no', label: 'No' },
+          ]}
           value={field.value === true ? 'yes' : field.value === false ? 'no' : undefined}
           onChange={(v) => field.onChange(v === 'yes')}
           error={errors[name]}
@@ -64,7 +97,14 @@ export function YesNoField({ name, label }: { name: Name; label: string }) {
 
 export function CheckboxField({ name, label, hint }: { name: Name; label: string; hint?: string }) {
   const { control } = useRecordForm();
-  return <Controller control={control} name={name} render={({ field }) => <Checkbox label={label} hint={hint} checked={Boolean(field.value)} onChange={field.onChange} />} />;
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field }) => <Checkbox label={label} hint={hint} checked={Boolean(field.value)} onChange={field.onChange} />}
+    />
+  );
 }
 
-export const options = <T extends string>(values: readonly T[], labels: Record<T, string>) => values.map((value) => ({ value, label: labels[value] }));
+export const options = <T extends string>(values: readonly T[], labels: Record<T, string>) =>
+  values.map((value) => ({ value, label: labels[value] }));

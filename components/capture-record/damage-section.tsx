@@ -1,12 +1,14 @@
 import { Controller, useFieldArray, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import type { StoredFile } from '@/shared/files';
-import { LOSS_TYPE_LABELS, LOSS_TYPES } from '@/shared/jobs';
+
 import { Button } from '@/components/ui/button';
 import { Checkbox } from '@/components/ui/checkbox';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
+import type { StoredFile } from '@/shared/files';
+import { LOSS_TYPE_LABELS, LOSS_TYPES } from '@/shared/jobs';
+
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
 import { newKey } from './form-values';
@@ -20,10 +22,18 @@ export function DamageSection({ photos, defaultLossType }: { photos: StoredFile[
     <Section title="Damage areas" summary={fields.length ? `${fields.length} recorded` : 'None recorded'}>
       {fields.map((field, i) => (
         <View key={field.fieldId} style={styles.item} role="group" aria-label={`Damage area ${i + 1}`}>
-          {roomOptions.length ? <ChoiceInputField name={`damageAreas.${i}.roomKey`} label="Room" options={roomOptions} /> : <Text variant="muted">Add rooms first to place the damage.</Text>}
+          {roomOptions.length ? (
+            <ChoiceInputField name={`damageAreas.${i}.roomKey`} label="Room" options={roomOptions} />
+          ) : (
+            <Text variant="muted">Add rooms first to place the damage.</Text>
+          )}
           <TextInputField name={`damageAreas.${i}.description`} label="What the damage is" hint="e.g. Ceiling stain about 3 ft across" />
           <ChoiceInputField name={`damageAreas.${i}.lossType`} label="Loss type" options={options(LOSS_TYPES, LOSS_TYPE_LABELS)} />
-          <TextInputField name={`damageAreas.${i}.stationNumbers`} label="Stations that view it clearly" hint="Numbers, separated by commas" />
+          <TextInputField
+            name={`damageAreas.${i}.stationNumbers`}
+            label="Stations that view it clearly"
+            hint="Numbers, separated by commas"
+          />
           <Text variant="label">Photos of this damage</Text>
           {photos.length === 0 ? <Text variant="muted">Upload photos under Files, then tick them here.</Text> : null}
           <Controller
@@ -36,20 +46,35 @@ export function DamageSection({ photos, defaultLossType }: { photos: StoredFile[
                     key={photo.id}
                     label={photo.name}
                     checked={photoField.value.includes(photo.id)}
-                    onChange={(on) => photoField.onChange(on ? [...photoField.value, photo.id] : photoField.value.filter((id: number) => id !== photo.id))}
+                    onChange={(on) =>
+                      photoField.onChange(on ? [...photoField.value, photo.id] : photoField.value.filter((id: number) => id !== photo.id))
+                    }
                   />
                 ))}
               </View>
             )}
           />
-          {errors[`damageAreas.${i}.photoFileIds`] ? <Text role="alert" style={{ color: colors.fail }}>{errors[`damageAreas.${i}.photoFileIds`]}</Text> : null}
+          {errors[`damageAreas.${i}.photoFileIds`] ? (
+            <Text role="alert" style={{ color: colors.fail }}>
+              {errors[`damageAreas.${i}.photoFileIds`]}
+            </Text>
+          ) : null}
           <Button label={`Remove damage area ${i + 1}`} tone="secondary" onPress={() => remove(i)} />
         </View>
       ))}
       <Button
         label="Add a damage area"
         tone="secondary"
-        onPress={() => append({ key: newKey('d'), roomKey: rooms[0]?.key ?? '', description: '', lossType: defaultLossType, stationNumbers: '', photoFileIds: [] })}
+        onPress={() =>
+          append({
+            key: newKey('d'),
+            roomKey: rooms[0]?.key ?? '',
+            description: '',
+            lossType: defaultLossType,
+            stationNumbers: '',
+            photoFileIds: [],
+          })
+        }
       />
     </Section>
   );

@@ -1,7 +1,7 @@
 import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { Linking, Pressable, StyleSheet, View } from 'react-native';
-import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, FILE_KINDS, type FileKind, type StoredFile } from '@/shared/files';
+
 import { ApiError } from '@/components/lib/api-client';
 import { formatBytes } from '@/components/lib/format';
 import { useFileDetachMutation, useFileUploadMutation } from '@/components/queries/job-files';
@@ -12,6 +12,7 @@ import { ProgressBar } from '@/components/ui/progress-bar';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, FILE_KINDS, type FileKind, type StoredFile } from '@/shared/files';
 
 type Pending = { kind: FileKind; name: string; blob: Blob };
 type UploadState =
@@ -95,6 +96,14 @@ export function FilesSection({ jobId, files, editable }: { jobId: number; files:
 }
 
 const styles = StyleSheet.create({
-  file: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.md, borderBottomWidth: 1, borderBottomColor: colors.line, paddingVertical: space.sm },
+  file: {
+    flexDirection: 'row',
+    justifyContent: 'space-between',
+    alignItems: 'center',
+    gap: space.md,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+    paddingVertical: space.sm,
+  },
   actions: { flexDirection: 'row', gap: space.lg, alignItems: 'center' },
 });

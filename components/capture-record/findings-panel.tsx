@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import type { CheckResult } from '@/shared/pre-submit-checks';
+
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import type { CheckResult } from '@/shared/pre-submit-checks';
 
 // Pre-submit findings in words: what blocks submission, and what is only a warning.
 export function FindingsPanel({ findings }: { findings: CheckResult }) {
@@ -14,7 +15,9 @@ export function FindingsPanel({ findings }: { findings: CheckResult }) {
       {clear ? <Text style={{ color: colors.pass, fontFamily: fonts.semibold }}>✓ Nothing missing, no warnings.</Text> : null}
       {findings.missing.length ? (
         <View style={{ gap: space.xs }}>
-          <Text style={{ color: colors.fail, fontFamily: fonts.semibold }}>{`Missing before you can submit (${findings.missing.length})`}</Text>
+          <Text
+            style={{ color: colors.fail, fontFamily: fonts.semibold }}
+          >{`Missing before you can submit (${findings.missing.length})`}</Text>
           {findings.missing.map((f) => (
             <Text key={`m-${f.field}`} variant="small">{`✕ ${f.message}`}</Text>
           ))}
@@ -22,7 +25,9 @@ export function FindingsPanel({ findings }: { findings: CheckResult }) {
       ) : null}
       {findings.warnings.length ? (
         <View style={{ gap: space.xs }}>
-          <Text style={{ color: colors.rework, fontFamily: fonts.semibold }}>{`Warnings (${findings.warnings.length}): you can still submit`}</Text>
+          <Text
+            style={{ color: colors.rework, fontFamily: fonts.semibold }}
+          >{`Warnings (${findings.warnings.length}): you can still submit`}</Text>
           {findings.warnings.map((f) => (
             <Text key={`w-${f.field}`} variant="small">{`! ${f.message}`}</Text>
           ))}
@@ -33,5 +38,14 @@ export function FindingsPanel({ findings }: { findings: CheckResult }) {
 }
 
 const styles = StyleSheet.create({
-  panel: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderLeftWidth: 4, borderLeftColor: colors.accent, borderRadius: 8, padding: space.lg, gap: space.sm },
+  panel: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderLeftWidth: 4,
+    borderLeftColor: colors.accent,
+    borderRadius: 8,
+    padding: space.lg,
+    gap: space.sm,
+  },
 });

@@ -1,15 +1,16 @@
 import { createContext, useContext } from 'react';
 import type { Control } from 'react-hook-form';
+
 import type { FormValues } from './form-values';
 
-type RecordFormContext = {
+type RecordFormValue = {
   control: Control<FormValues>;
   // Field errors from parsing and from the server, by field path (rooms.0.name).
   errors: Record<string, string>;
   unitLabel: string;
 };
 
-export const RecordFormContext = createContext<RecordFormContext | null>(null);
+export const RecordFormContext = createContext<RecordFormValue | null>(null);
 
 export function useRecordForm() {
   const value = useContext(RecordFormContext);

@@ -1,17 +1,17 @@
 // The form edits numbers as text in the technician's chosen unit; the record stores SI.
 // These two pure functions translate between them and report text that is not a number.
 import {
-  LEVEL_KINDS,
-  REFLECTIVE_KINDS,
   type CaptureRecord,
   type CoverageGap,
   type DamageArea,
   type DetachedStructure,
+  LEVEL_KINDS,
   type LevelKind,
   type Model,
+  REFLECTIVE_KINDS,
   type ReflectiveKind,
 } from '@/shared/capture-record';
-import { fromMetres, fromSquareMetres, roundTo, toMetres, toSquareMetres, type LengthUnit } from '@/shared/units';
+import { fromMetres, fromSquareMetres, type LengthUnit, roundTo, toMetres, toSquareMetres } from '@/shared/units';
 
 export type RoomForm = {
   key: string;
@@ -140,7 +140,8 @@ export function toRecord(values: FormValues): Conversion {
   const damageAreas = values.damageAreas.map((area, i) => {
     const parts = area.stationNumbers.split(/[\s,;]+/).filter(Boolean);
     const numbers = parts.map(Number);
-    if (numbers.some((n) => !Number.isInteger(n) || n < 1)) errors[`damageAreas.${i}.stationNumbers`] = 'List station numbers such as 4, 5, 12';
+    if (numbers.some((n) => !Number.isInteger(n) || n < 1))
+      errors[`damageAreas.${i}.stationNumbers`] = 'List station numbers such as 4, 5, 12';
     return { ...area, stationNumbers: numbers.filter((n) => Number.isInteger(n) && n >= 1) };
   });
 

@@ -1,9 +1,11 @@
 import { useFieldArray } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import { GAP_CAUSE_LABELS, GAP_CAUSES } from '@/shared/capture-record';
+
 import { Button } from '@/components/ui/button';
 import { Section } from '@/components/ui/section';
 import { colors, space } from '@/components/ui/theme';
+import { GAP_CAUSE_LABELS, GAP_CAUSES } from '@/shared/capture-record';
+
 import { ChoiceInputField, options, TextInputField, YesNoField } from './controlled';
 import { useRecordForm } from './form-context';
 import { newKey } from './form-values';
@@ -22,7 +24,11 @@ export function GapsSection() {
           <Button label={`Remove gap ${i + 1}`} tone="secondary" onPress={() => remove(i)} />
         </View>
       ))}
-      <Button label="Add a coverage gap" tone="secondary" onPress={() => append({ key: newKey('g'), location: '', cause: 'direct_sun', resolved: false, note: '' })} />
+      <Button
+        label="Add a coverage gap"
+        tone="secondary"
+        onPress={() => append({ key: newKey('g'), location: '', cause: 'direct_sun', resolved: false, note: '' })}
+      />
     </Section>
   );
 }

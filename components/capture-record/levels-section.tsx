@@ -1,9 +1,11 @@
 import { Controller, useWatch } from 'react-hook-form';
 import { View } from 'react-native';
-import { LEVEL_KINDS, LEVEL_LABELS } from '@/shared/capture-record';
+
 import { Checkbox } from '@/components/ui/checkbox';
 import { Section } from '@/components/ui/section';
 import { space } from '@/components/ui/theme';
+import { LEVEL_KINDS, LEVEL_LABELS } from '@/shared/capture-record';
+
 import { TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
 
@@ -20,7 +22,13 @@ export function LevelsSection() {
             name={`levels.${level}.captured`}
             render={({ field }) => <Checkbox label={LEVEL_LABELS[level]} checked={field.value} onChange={field.onChange} />}
           />
-          {levels[level].captured ? <TextInputField name={`levels.${level}.stations`} label={`Stations on ${LEVEL_LABELS[level].toLowerCase()}`} numeric="numeric" /> : null}
+          {levels[level].captured ? (
+            <TextInputField
+              name={`levels.${level}.stations`}
+              label={`Stations on ${LEVEL_LABELS[level].toLowerCase()}`}
+              numeric="numeric"
+            />
+          ) : null}
         </View>
       ))}
     </Section>

@@ -1,10 +1,12 @@
 import { useFieldArray, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import { SPLIT_REASON_LABELS, SPLIT_REASONS, STRUCTURE_LABELS, STRUCTURES } from '@/shared/capture-record';
+
 import { Button } from '@/components/ui/button';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
+import { SPLIT_REASON_LABELS, SPLIT_REASONS, STRUCTURE_LABELS, STRUCTURES } from '@/shared/capture-record';
+
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
 import { newKey } from './form-values';
@@ -21,10 +23,18 @@ export function ModelsSection() {
       {models.fields.map((field, i) => (
         <View key={field.fieldId} style={styles.item} role="group" aria-label={`Model ${i + 1}`}>
           <Text variant="label">{`Model ${i + 1}`}</Text>
-          <ChoiceInputField name={`models.${i}.structure`} label="Structure in this model" options={options(STRUCTURES, STRUCTURE_LABELS)} />
+          <ChoiceInputField
+            name={`models.${i}.structure`}
+            label="Structure in this model"
+            options={options(STRUCTURES, STRUCTURE_LABELS)}
+          />
           {modelValues[i]?.structure !== 'main_dwelling' ? (
             <>
-              <ChoiceInputField name={`models.${i}.splitReason`} label="Why it is a separate model" options={options(SPLIT_REASONS, SPLIT_REASON_LABELS)} />
+              <ChoiceInputField
+                name={`models.${i}.splitReason`}
+                label="Why it is a separate model"
+                options={options(SPLIT_REASONS, SPLIT_REASON_LABELS)}
+              />
               <TextInputField name={`models.${i}.splitNote`} label="Note on the split (optional)" />
             </>
           ) : null}
@@ -35,20 +45,41 @@ export function ModelsSection() {
       <Button
         label="Add a model"
         tone="secondary"
-        onPress={() => models.append({ key: newKey('m'), structure: models.fields.length ? 'detached_garage' : 'main_dwelling', structureNote: '', splitReason: null, splitNote: '', platformReference: '' })}
+        onPress={() =>
+          models.append({
+            key: newKey('m'),
+            structure: models.fields.length ? 'detached_garage' : 'main_dwelling',
+            structureNote: '',
+            splitReason: null,
+            splitNote: '',
+            platformReference: '',
+          })
+        }
       />
       <Text variant="label">Detached structures on the property</Text>
       {structures.fields.map((field, i) => (
         <View key={field.fieldId} style={styles.item} role="group" aria-label={`Detached structure ${i + 1}`}>
           <TextInputField name={`detachedStructures.${i}.name`} label="Structure name" hint="e.g. Garden shed" />
-          <ChoiceInputField name={`detachedStructures.${i}.structure`} label="Kind" options={options(STRUCTURES.filter((s) => s !== 'main_dwelling'), STRUCTURE_LABELS)} />
-          {modelOptions.length ? <ChoiceInputField name={`detachedStructures.${i}.modelKey`} label="Captured in" options={modelOptions} /> : null}
+          <ChoiceInputField
+            name={`detachedStructures.${i}.structure`}
+            label="Kind"
+            options={options(
+              STRUCTURES.filter((s) => s !== 'main_dwelling'),
+              STRUCTURE_LABELS,
+            )}
+          />
+          {modelOptions.length ? (
+            <ChoiceInputField name={`detachedStructures.${i}.modelKey`} label="Captured in" options={modelOptions} />
+          ) : null}
           <TextInputField name={`detachedStructures.${i}.noModelReason`} label="If not captured: why" />
           <Button label={`Remove structure ${i + 1}`} tone="secondary" onPress={() => structures.remove(i)} />
         </View>
       ))}
-      <Button label="Add a detached structure" tone="secondary"
-        onPress={() => structures.append({ key: newKey('s'), name: '', structure: 'detached_garage', modelKey: null, noModelReason: '' })} />
+      <Button
+        label="Add a detached structure"
+        tone="secondary"
+        onPress={() => structures.append({ key: newKey('s'), name: '', structure: 'detached_garage', modelKey: null, noModelReason: '' })}
+      />
     </Section>
   );
 }

@@ -1,15 +1,17 @@
 // The short sections of the capture record form.
 import { Controller, useWatch } from 'react-hook-form';
 import { View } from 'react-native';
-import { CAMERA_CLASS_LABELS, CAMERA_CLASSES, GLAZING_FLAGGED, HAZARD_LABELS, HAZARDS, type Hazard } from '@/shared/capture-record';
+
+import { formatDateTime } from '@/components/lib/format';
 import { Checkbox } from '@/components/ui/checkbox';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Notice } from '@/components/ui/notice';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
+import { CAMERA_CLASS_LABELS, CAMERA_CLASSES, GLAZING_FLAGGED, type Hazard, HAZARD_LABELS, HAZARDS } from '@/shared/capture-record';
 import type { LengthUnit } from '@/shared/units';
-import { formatDateTime } from '@/components/lib/format';
+
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
 
@@ -20,8 +22,20 @@ export function CameraSection({ onUnitsChange }: { onUnitsChange: (unit: LengthU
   return (
     <Section title="Camera and units" summary={cameraClass ? CAMERA_CLASS_LABELS[cameraClass] : 'Camera class not chosen'}>
       <ChoiceInputField name="cameraClass" label="Camera class" options={options(CAMERA_CLASSES, CAMERA_CLASS_LABELS)} />
-      <ChoiceField<LengthUnit> label="Units for sizes" options={[{ value: 'ft', label: 'Feet' }, { value: 'm', label: 'Metres' }]} value={units} onChange={onUnitsChange} />
-      <ChoiceInputField name="glazingFlagged" label="Windows and glass doors (glazing) flagged" options={options(GLAZING_FLAGGED, { yes: 'Yes', no: 'No', partly: 'Partly' })} />
+      <ChoiceField<LengthUnit>
+        label="Units for sizes"
+        options={[
+          { value: 'ft', label: 'Feet' },
+          { value: 'm', label: 'Metres' },
+        ]}
+        value={units}
+        onChange={onUnitsChange}
+      />
+      <ChoiceInputField
+        name="glazingFlagged"
+        label="Windows and glass doors (glazing) flagged"
+        options={options(GLAZING_FLAGGED, { yes: 'Yes', no: 'No', partly: 'Partly' })}
+      />
     </Section>
   );
 }
@@ -30,8 +44,14 @@ export function PanoramasSection() {
   const { control } = useRecordForm();
   const rooms = useWatch({ control, name: 'rooms' });
   return (
-    <Section title="Supplementary panoramas" summary="Extra 360 photos not registered to stations, e.g. open cabinets" initiallyOpen={false}>
-      <Text variant="muted">Common practice: open each damaged cabinet and set the camera level with its shelves, so the inside shows.</Text>
+    <Section
+      title="Supplementary panoramas"
+      summary="Extra 360 photos not registered to stations, e.g. open cabinets"
+      initiallyOpen={false}
+    >
+      <Text variant="muted">
+        Common practice: open each damaged cabinet and set the camera level with its shelves, so the inside shows.
+      </Text>
       <TextInputField name="panoramas.count" label="How many" numeric="numeric" />
       <Text variant="label">Rooms with panoramas</Text>
       <Controller
@@ -40,8 +60,12 @@ export function PanoramasSection() {
         render={({ field }) => (
           <View>
             {rooms.map((room, i) => (
-              <Checkbox key={room.key} label={room.name.trim() || `Room ${i + 1}`} checked={field.value.includes(room.key)}
-                onChange={(on) => field.onChange(on ? [...field.value, room.key] : field.value.filter((k: string) => k !== room.key))} />
+              <Checkbox
+                key={room.key}
+                label={room.name.trim() || `Room ${i + 1}`}
+                checked={field.value.includes(room.key)}
+                onChange={(on) => field.onChange(on ? [...field.value, room.key] : field.value.filter((k: string) => k !== room.key))}
+              />
             ))}
           </View>
         )}
@@ -65,7 +89,11 @@ export function ProcessingSection() {
               onChange={(confirmed) => field.onChange({ confirmed, confirmedAt: confirmed ? new Date().toISOString() : null })}
             />
             {field.value.confirmedAt ? <Text variant="muted">{`Confirmed ${formatDateTime(field.value.confirmedAt)}`}</Text> : null}
-            {errors['processing.confirmed'] ? <Text role="alert" style={{ color: '#B42318' }}>{errors['processing.confirmed']}</Text> : null}
+            {errors['processing.confirmed'] ? (
+              <Text role="alert" style={{ color: '#B42318' }}>
+                {errors['processing.confirmed']}
+              </Text>
+            ) : null}
           </View>
         )}
       />
@@ -78,9 +106,9 @@ export function SafetySection() {
   return (
     <Section title="Site safety" summary="Hazards met on site" initiallyOpen={false}>
       <Notice tone="caution">
-        Attics, crawl spaces, standing water, live wiring, roofs and ladders can hurt you. Follow your firm's safety policy and local
-        codes; do not enter an unsafe space or touch wiring or structure that a licensed professional should assess. Record a gap
-        instead of taking a risk.
+        Attics, crawl spaces, standing water, live wiring, roofs and ladders can hurt you. Follow your firm&apos;s safety policy and local
+        codes; do not enter an unsafe space or touch wiring or structure that a licensed professional should assess. Record a gap instead of
+        taking a risk.
       </Notice>
       <Controller
         control={control}
@@ -88,8 +116,12 @@ export function SafetySection() {
         render={({ field }) => (
           <View>
             {HAZARDS.map((hazard: Hazard) => (
-              <Checkbox key={hazard} label={HAZARD_LABELS[hazard]} checked={field.value.includes(hazard)}
-                onChange={(on) => field.onChange(on ? [...field.value, hazard] : field.value.filter((h: Hazard) => h !== hazard))} />
+              <Checkbox
+                key={hazard}
+                label={HAZARD_LABELS[hazard]}
+                checked={field.value.includes(hazard)}
+                onChange={(on) => field.onChange(on ? [...field.value, hazard] : field.value.filter((h: Hazard) => h !== hazard))}
+              />
             ))}
           </View>
         )}

@@ -1,10 +1,12 @@
 import { useFieldArray, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import { LEVEL_KINDS, LEVEL_LABELS, REFLECTIVE_KINDS, REFLECTIVE_LABELS } from '@/shared/capture-record';
+
 import { Button } from '@/components/ui/button';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
+import { LEVEL_KINDS, LEVEL_LABELS, REFLECTIVE_KINDS, REFLECTIVE_LABELS } from '@/shared/capture-record';
+
 import { ChoiceInputField, options, TextInputField, YesNoField } from './controlled';
 import { useRecordForm } from './form-context';
 import { emptyRoom } from './form-values';
@@ -23,17 +25,35 @@ export function RoomsSection() {
             <TextInputField name={`rooms.${i}.name`} label="Room name" />
             <ChoiceInputField name={`rooms.${i}.level`} label="Level" options={options(LEVEL_KINDS, LEVEL_LABELS)} />
             <View style={styles.row}>
-              <View style={styles.cell}><TextInputField name={`rooms.${i}.length`} label={`Length (${unitLabel})`} numeric="decimal" /></View>
-              <View style={styles.cell}><TextInputField name={`rooms.${i}.width`} label={`Width (${unitLabel})`} numeric="decimal" /></View>
-              <View style={styles.cell}><TextInputField name={`rooms.${i}.area`} label={`or area (${unitLabel}²)`} hint="If not a rectangle" numeric="decimal" /></View>
+              <View style={styles.cell}>
+                <TextInputField name={`rooms.${i}.length`} label={`Length (${unitLabel})`} numeric="decimal" />
+              </View>
+              <View style={styles.cell}>
+                <TextInputField name={`rooms.${i}.width`} label={`Width (${unitLabel})`} numeric="decimal" />
+              </View>
+              <View style={styles.cell}>
+                <TextInputField name={`rooms.${i}.area`} label={`or area (${unitLabel}²)`} hint="If not a rectangle" numeric="decimal" />
+              </View>
             </View>
             <TextInputField name={`rooms.${i}.stations`} label="Stations in this room" numeric="numeric" />
             <YesNoField name={`rooms.${i}.doorwayStation`} label="Station in the doorway (sees both rooms)" />
             <Text variant="label">Reflective surfaces: found / flagged in the capture</Text>
             {REFLECTIVE_KINDS.map((kind) => (
               <View key={kind} style={styles.row}>
-                <View style={styles.cell}><TextInputField name={`rooms.${i}.reflective.${kind}.found`} label={`${REFLECTIVE_LABELS[kind]} found`} numeric="numeric" /></View>
-                <View style={styles.cell}><TextInputField name={`rooms.${i}.reflective.${kind}.flagged`} label={`${REFLECTIVE_LABELS[kind]} flagged`} numeric="numeric" /></View>
+                <View style={styles.cell}>
+                  <TextInputField
+                    name={`rooms.${i}.reflective.${kind}.found`}
+                    label={`${REFLECTIVE_LABELS[kind]} found`}
+                    numeric="numeric"
+                  />
+                </View>
+                <View style={styles.cell}>
+                  <TextInputField
+                    name={`rooms.${i}.reflective.${kind}.flagged`}
+                    label={`${REFLECTIVE_LABELS[kind]} flagged`}
+                    numeric="numeric"
+                  />
+                </View>
               </View>
             ))}
             <Button label={`Remove ${name}`} tone="secondary" onPress={() => remove(i)} />

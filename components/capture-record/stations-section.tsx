@@ -1,6 +1,8 @@
 import { useWatch } from 'react-hook-form';
+
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
+
 import { TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
 
@@ -13,7 +15,12 @@ export function StationsSection() {
   return (
     <Section title="Station count" summary={`Rooms ${inRooms} + exterior ${Number.parseInt(exterior, 10) || 0} = ${sum}`}>
       <TextInputField name="exteriorStations" label="Exterior stations" numeric="numeric" />
-      <TextInputField name="totalStations" label="Total stations in the capture" hint="Must equal the stations in rooms plus exterior" numeric="numeric" />
+      <TextInputField
+        name="totalStations"
+        label="Total stations in the capture"
+        hint="Must equal the stations in rooms plus exterior"
+        numeric="numeric"
+      />
       <Text variant="muted">{`Stations in rooms plus exterior: ${sum}`}</Text>
     </Section>
   );

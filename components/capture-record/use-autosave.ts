@@ -1,5 +1,6 @@
 import { useCallback, useEffect, useRef, useState } from 'react';
 import { AppState } from 'react-native';
+
 import type { CaptureRecord } from '@/shared/capture-record';
 
 export type AutosaveState =
@@ -16,11 +17,15 @@ const RETRY_MS = 5000;
 export function useAutosave(record: CaptureRecord, blocked: boolean, save: (record: CaptureRecord) => Promise<{ savedAt: string }>) {
   const [state, setState] = useState<AutosaveState>({ status: 'idle' });
   const latest = useRef(record);
-  latest.current = record;
   const dirty = useRef(false);
   const retry = useRef<ReturnType<typeof setTimeout> | null>(null);
   const serialized = JSON.stringify(record);
-  const first = useRef(serialized);
+  const [first] = useState(serialized);
+  const flushLater = useRef<() => void>(() => undefined);
+
+  useEffect(() => {
+    latest.current = record;
+  });
 
   const flush = useCallback(async () => {
     if (!dirty.current) return;
@@ -33,21 +38,24 @@ export function useAutosave(record: CaptureRecord, blocked: boolean, save: (reco
     } catch (error) {
       dirty.current = true;
       setState({ status: 'error', message: (error as Error).message });
-      retry.current = setTimeout(() => void flush(), RETRY_MS);
+      retry.current = setTimeout(() => flushLater.current(), RETRY_MS);
     }
   }, [save]);
 
   useEffect(() => {
-    if (serialized === first.current) return;
+    flushLater.current = () => void flush();
+  }, [flush]);
+
+  useEffect(() => {
+    if (serialized === first) return;
     dirty.current = true;
-    if (blocked) {
-      setState({ status: 'blocked' });
-      return;
-    }
-    setState({ status: 'pending' });
+    // The status must say "not saved" the moment the record changes, not after the debounce.
+    // eslint-disable-next-line react-hooks/set-state-in-effect
+    setState({ status: blocked ? 'blocked' : 'pending' });
+    if (blocked) return;
     const timer = setTimeout(() => void flush(), DEBOUNCE_MS);
     return () => clearTimeout(timer);
-  }, [serialized, blocked, flush]);
+  }, [serialized, first, blocked, flush]);
 
   useEffect(() => {
     const subscription = AppState.addEventListener('change', (next) => {

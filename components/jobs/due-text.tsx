@@ -1,6 +1,6 @@
-import { describeDue, FINISHED_STATUSES, type JobSummary } from '@/shared/jobs';
 import { Text } from '@/components/ui/text';
 import { colors, fonts } from '@/components/ui/theme';
+import { describeDue, FINISHED_STATUSES, type JobSummary } from '@/shared/jobs';
 
 export function DueText({ job, now = new Date() }: { job: Pick<JobSummary, 'dueAt' | 'status'>; now?: Date }) {
   const due = describeDue(job.dueAt, now, FINISHED_STATUSES.includes(job.status));

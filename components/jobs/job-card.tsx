@@ -1,8 +1,10 @@
 import { Link } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
-import { LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS, type JobSummary } from '@/shared/jobs';
+
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { type JobSummary, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
+
 import { DueText } from './due-text';
 import { StatusBadge } from './status-badge';
 
@@ -27,7 +29,15 @@ export function JobCard({ job }: { job: JobSummary }) {
 
 const styles = StyleSheet.create({
   link: { textDecorationLine: 'none' },
-  card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: 8, padding: space.lg, gap: space.xs, width: '100%' },
+  card: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: 8,
+    padding: space.lg,
+    gap: space.xs,
+    width: '100%',
+  },
   top: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.sm },
   claim: { fontFamily: fonts.semibold, fontSize: 16, color: colors.ink },
 });

@@ -1,22 +1,24 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
-import { EDITABLE_STATUSES, JOB_STATUS_LABELS, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
+
 import { CaptureRecordForm } from '@/components/capture-record/capture-record-form';
 import { FilesSection } from '@/components/capture-record/files-section';
 import { FindingsPanel } from '@/components/capture-record/findings-panel';
 import { formatDate, formatDateTime } from '@/components/lib/format';
 import { useJobQuery, useRevisionQuery } from '@/components/queries/jobs';
 import { useSessionQuery } from '@/components/queries/session';
+import { ReworkChecklist } from '@/components/rework/rework-checklist';
+import { Timeline } from '@/components/rework/timeline';
+import { StationSection } from '@/components/stations/station-section';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { EDITABLE_STATUSES, JOB_STATUS_LABELS, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
+
 import { AssignmentPanel } from './assignment-panel';
 import { DueText } from './due-text';
 import { RecordView } from './record-view';
-import { StationSection } from '@/components/stations/station-section';
-import { ReworkChecklist } from '@/components/rework/rework-checklist';
-import { Timeline } from '@/components/rework/timeline';
 import { StatusBadge } from './status-badge';
 
 export function JobScreen({ id }: { id: number }) {
@@ -27,8 +29,18 @@ export function JobScreen({ id }: { id: number }) {
   const shown = chosen ?? latest;
   const revision = useRevisionQuery(id, shown);
 
-  if (query.error) return <Screen title="Job"><Notice tone="error">{query.error.message}</Notice></Screen>;
-  if (!query.data) return <Screen title="Job"><Text variant="muted">Loading…</Text></Screen>;
+  if (query.error)
+    return (
+      <Screen title="Job">
+        <Notice tone="error">{query.error.message}</Notice>
+      </Screen>
+    );
+  if (!query.data)
+    return (
+      <Screen title="Job">
+        <Text variant="muted">Loading…</Text>
+      </Screen>
+    );
 
   const { job } = query.data;
   const canEdit = user?.role === 'technician' && user.id === job.technician.id && EDITABLE_STATUSES.includes(job.status);
@@ -43,7 +55,9 @@ export function JobScreen({ id }: { id: number }) {
       </View>
 
       {user?.role === 'manager' || user?.role === 'admin' ? <AssignmentPanel job={job} /> : null}
-      {job.status === 'rework_requested' || (latest !== null && latest > 1) ? <ReworkChecklist jobId={job.id} editable={canEdit} files={query.data.files} /> : null}
+      {job.status === 'rework_requested' || (latest !== null && latest > 1) ? (
+        <ReworkChecklist jobId={job.id} editable={canEdit} files={query.data.files} />
+      ) : null}
       {canEdit ? (
         <CaptureRecordForm key={query.data.recordVersion} detail={query.data} />
       ) : (
@@ -55,9 +69,16 @@ export function JobScreen({ id }: { id: number }) {
               <Notice tone="info">{`${JOB_STATUS_LABELS[job.status]}. Latest: revision ${latest}, submitted ${formatDateTime(query.data.revisions.at(-1)!.submittedAt)}.`}</Notice>
               <View style={styles.revisions} role="tablist" aria-label="Revisions">
                 {query.data.revisions.map((r) => (
-                  <Pressable key={r.number} role="tab" aria-selected={r.number === shown} onPress={() => setChosen(r.number)}
-                    style={[styles.tab, r.number === shown && styles.tabSelected]}>
-                    <Text style={{ fontFamily: fonts.semibold, color: r.number === shown ? colors.surface : colors.ink }}>{`Revision ${r.number}`}</Text>
+                  <Pressable
+                    key={r.number}
+                    role="tab"
+                    aria-selected={r.number === shown}
+                    onPress={() => setChosen(r.number)}
+                    style={[styles.tab, r.number === shown && styles.tabSelected]}
+                  >
+                    <Text
+                      style={{ fontFamily: fonts.semibold, color: r.number === shown ? colors.surface : colors.ink }}
+                    >{`Revision ${r.number}`}</Text>
                   </Pressable>
                 ))}
               </View>
@@ -67,7 +88,13 @@ export function JobScreen({ id }: { id: number }) {
                   <FindingsPanel findings={revision.data.findings} />
                 </View>
               ) : null}
-              {revision.data ? <StationSection jobId={job.id} revision={revision.data.number} hasFile={revision.data.files.some((f) => f.kind === 'station_coordinates')} /> : null}
+              {revision.data ? (
+                <StationSection
+                  jobId={job.id}
+                  revision={revision.data.number}
+                  hasFile={revision.data.files.some((f) => f.kind === 'station_coordinates')}
+                />
+              ) : null}
             </>
           )}
           <FilesSection jobId={job.id} files={query.data.files} editable={false} />

@@ -1,13 +1,15 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { View } from 'react-native';
-import { JOB_STATUSES, type JobStatus } from '@/shared/jobs';
-import { useSessionQuery } from '@/components/queries/session';
+
 import { useJobsQuery } from '@/components/queries/jobs';
+import { useSessionQuery } from '@/components/queries/session';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
+import { JOB_STATUSES, type JobStatus } from '@/shared/jobs';
+
 import { JobCard } from './job-card';
 import { JobsTable } from './jobs-table';
 import { StatusFilter } from './status-filter';

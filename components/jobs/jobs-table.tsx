@@ -1,7 +1,9 @@
 import { useRouter } from 'expo-router';
 import { useMemo } from 'react';
-import { LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS, type JobSummary } from '@/shared/jobs';
+
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
+import { type JobSummary, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
+
 import { DueText } from './due-text';
 import { StatusBadge } from './status-badge';
 

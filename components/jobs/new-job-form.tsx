@@ -1,12 +1,9 @@
 import { useRouter } from 'expo-router';
 import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import {
-  LOSS_TYPE_LABELS, LOSS_TYPES, PRIORITIES, PRIORITY_LABELS, PROPERTY_TYPE_LABELS, PROPERTY_TYPES,
-  type LossType, type Priority, type PropertyType,
-} from '@/shared/jobs';
+
 import { ApiError } from '@/components/lib/api-client';
-import { useJobCreateMutation, type NewJob } from '@/components/queries/jobs';
+import { type NewJob, useJobCreateMutation } from '@/components/queries/jobs';
 import { useTechniciansQuery } from '@/components/queries/technicians';
 import { Button } from '@/components/ui/button';
 import { ChoiceField } from '@/components/ui/choice-field';
@@ -14,10 +11,27 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
 import { colors, space } from '@/components/ui/theme';
+import {
+  LOSS_TYPE_LABELS,
+  LOSS_TYPES,
+  type LossType,
+  PRIORITIES,
+  type Priority,
+  PRIORITY_LABELS,
+  PROPERTY_TYPE_LABELS,
+  PROPERTY_TYPES,
+  type PropertyType,
+} from '@/shared/jobs';
 
-type Values = Omit<NewJob, 'technicianId' | 'siteVisitDate' | 'dueAt'> & { technicianId: string; siteVisitDate: string; dueDate: string; dueTime: string };
+type Values = Omit<NewJob, 'technicianId' | 'siteVisitDate' | 'dueAt'> & {
+  technicianId: string;
+  siteVisitDate: string;
+  dueDate: string;
+  dueTime: string;
+};
 
-const options = <T extends string>(values: readonly T[], labels: Record<T, string>) => values.map((value) => ({ value, label: labels[value] }));
+const options = <T extends string>(values: readonly T[], labels: Record<T, string>) =>
+  values.map((value) => ({ value, label: labels[value] }));
 
 export function NewJobForm() {
   const router = useRouter();
@@ -25,8 +39,18 @@ export function NewJobForm() {
   const create = useJobCreateMutation();
   const { control, handleSubmit, setError } = useForm<Values>({
     defaultValues: {
-      claimReference: '', street: '', city: '', postcode: '', propertyType: 'single_family', lossType: 'water',
-      lossDate: '', siteVisitDate: '', dueDate: '', dueTime: '17:00', priority: 'normal', technicianId: '',
+      claimReference: '',
+      street: '',
+      city: '',
+      postcode: '',
+      propertyType: 'single_family',
+      lossType: 'water',
+      lossDate: '',
+      siteVisitDate: '',
+      dueDate: '',
+      dueTime: '17:00',
+      priority: 'normal',
+      technicianId: '',
     },
   });
 
@@ -54,28 +78,58 @@ export function NewJobForm() {
   });
 
   const text = (name: keyof Values, label: string, hint?: string) => (
-    <Controller control={control} name={name}
+    <Controller
+      control={control}
+      name={name}
       render={({ field, fieldState }) => (
-        <TextField label={label} hint={hint} value={String(field.value ?? '')} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
-      )} />
+        <TextField
+          label={label}
+          hint={hint}
+          value={String(field.value ?? '')}
+          onChangeText={field.onChange}
+          onBlur={field.onBlur}
+          error={fieldState.error?.message}
+        />
+      )}
+    />
   );
 
   return (
     <Screen title="New job" subtitle="One site visit for one claim">
       <View style={styles.card} role="form" aria-label="New job">
-        {create.error instanceof ApiError && Object.keys(create.error.fields).length === 0 ? <Notice tone="error">{create.error.message}</Notice> : null}
+        {create.error instanceof ApiError && Object.keys(create.error.fields).length === 0 ? (
+          <Notice tone="error">{create.error.message}</Notice>
+        ) : null}
         {text('claimReference', 'Claim reference', 'Letters, digits and dashes')}
         {text('street', 'Street address')}
         <View style={styles.row}>
           <View style={styles.grow}>{text('city', 'City')}</View>
           <View style={styles.grow}>{text('postcode', 'Postcode')}</View>
         </View>
-        <Controller control={control} name="propertyType" render={({ field }) => (
-          <ChoiceField<PropertyType> label="Property type" options={options(PROPERTY_TYPES, PROPERTY_TYPE_LABELS)} value={field.value} onChange={field.onChange} />
-        )} />
-        <Controller control={control} name="lossType" render={({ field }) => (
-          <ChoiceField<LossType> label="Loss type" options={options(LOSS_TYPES, LOSS_TYPE_LABELS)} value={field.value} onChange={field.onChange} />
-        )} />
+        <Controller
+          control={control}
+          name="propertyType"
+          render={({ field }) => (
+            <ChoiceField<PropertyType>
+              label="Property type"
+              options={options(PROPERTY_TYPES, PROPERTY_TYPE_LABELS)}
+              value={field.value}
+              onChange={field.onChange}
+            />
+          )}
+        />
+        <Controller
+          control={control}
+          name="lossType"
+          render={({ field }) => (
+            <ChoiceField<LossType>
+              label="Loss type"
+              options={options(LOSS_TYPES, LOSS_TYPE_LABELS)}
+              value={field.value}
+              onChange={field.onChange}
+            />
+          )}
+        />
         <View style={styles.row}>
           <View style={styles.grow}>{text('lossDate', 'Loss date', 'YYYY-MM-DD')}</View>
           <View style={styles.grow}>{text('siteVisitDate', 'Site-visit date (optional)', 'YYYY-MM-DD')}</View>
@@ -84,13 +138,32 @@ export function NewJobForm() {
           <View style={styles.grow}>{text('dueDate', 'Delivery due date', 'YYYY-MM-DD')}</View>
           <View style={styles.grow}>{text('dueTime', 'Due time', 'HH:MM, local time')}</View>
         </View>
-        <Controller control={control} name="priority" render={({ field }) => (
-          <ChoiceField<Priority> label="Priority" options={options(PRIORITIES, PRIORITY_LABELS)} value={field.value} onChange={field.onChange} />
-        )} />
-        <Controller control={control} name="technicianId" rules={{ required: 'Choose a technician' }} render={({ field, fieldState }) => (
-          <ChoiceField<string> label="Assigned technician" options={(technicians.data ?? []).map((t) => ({ value: String(t.id), label: t.name }))}
-            value={field.value} onChange={field.onChange} error={fieldState.error?.message} />
-        )} />
+        <Controller
+          control={control}
+          name="priority"
+          render={({ field }) => (
+            <ChoiceField<Priority>
+              label="Priority"
+              options={options(PRIORITIES, PRIORITY_LABELS)}
+              value={field.value}
+              onChange={field.onChange}
+            />
+          )}
+        />
+        <Controller
+          control={control}
+          name="technicianId"
+          rules={{ required: 'Choose a technician' }}
+          render={({ field, fieldState }) => (
+            <ChoiceField<string>
+              label="Assigned technician"
+              options={(technicians.data ?? []).map((t) => ({ value: String(t.id), label: t.name }))}
+              value={field.value}
+              onChange={field.onChange}
+              error={fieldState.error?.message}
+            />
+          )}
+        />
         <Button label="Create job" onPress={submit} busy={create.isPending} />
       </View>
     </Screen>
@@ -98,7 +171,15 @@ export function NewJobForm() {
 }
 
 const styles = StyleSheet.create({
-  card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: 8, padding: space.lg, gap: space.md, maxWidth: 760 },
+  card: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: 8,
+    padding: space.lg,
+    gap: space.md,
+    maxWidth: 760,
+  },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   grow: { flexGrow: 1, flexBasis: 220 },
 });

@@ -1,13 +1,21 @@
 // A submitted revision, read-only: what the reviewer and the technician see after submit.
 import { StyleSheet, View } from 'react-native';
-import {
-  CAMERA_CLASS_LABELS, GAP_CAUSE_LABELS, HAZARD_LABELS, LEVEL_LABELS, REFLECTIVE_LABELS, SPLIT_REASON_LABELS, STRUCTURE_LABELS,
-  roomAreaM2, type CaptureRecord,
-} from '@/shared/capture-record';
-import { AREA_LABEL, fromMetres, fromSquareMetres, roundTo } from '@/shared/units';
+
 import { formatDateTime } from '@/components/lib/format';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
+import {
+  CAMERA_CLASS_LABELS,
+  type CaptureRecord,
+  GAP_CAUSE_LABELS,
+  HAZARD_LABELS,
+  LEVEL_LABELS,
+  REFLECTIVE_LABELS,
+  roomAreaM2,
+  SPLIT_REASON_LABELS,
+  STRUCTURE_LABELS,
+} from '@/shared/capture-record';
+import { AREA_LABEL, fromMetres, fromSquareMetres, roundTo } from '@/shared/units';
 
 function Fact({ label, value }: { label: string; value: string }) {
   return (
@@ -28,7 +36,14 @@ export function RecordView({ record }: { record: CaptureRecord }) {
         <Fact label="Stations" value={`${record.totalStations ?? '–'} (exterior ${record.exteriorStations})`} />
         <Fact label="Levels" value={record.levels.map((l) => `${LEVEL_LABELS[l.level]} ${l.stations}`).join(', ') || 'none'} />
         <Fact label="Glazing flagged" value={record.glazingFlagged ?? 'not given'} />
-        <Fact label="Processing" value={record.processing.confirmed ? `Confirmed${record.processing.confirmedAt ? ` ${formatDateTime(record.processing.confirmedAt)}` : ''}` : 'Not confirmed'} />
+        <Fact
+          label="Processing"
+          value={
+            record.processing.confirmed
+              ? `Confirmed${record.processing.confirmedAt ? ` ${formatDateTime(record.processing.confirmedAt)}` : ''}`
+              : 'Not confirmed'
+          }
+        />
         <Fact label="Panoramas" value={String(record.panoramas.count)} />
       </View>
       <Text variant="label">Rooms</Text>
@@ -51,12 +66,16 @@ export function RecordView({ record }: { record: CaptureRecord }) {
       <Text variant="label">Models</Text>
       {record.models.map((m) => (
         <Text key={m.key} variant="small">
-          {`${STRUCTURE_LABELS[m.structure]} · ${m.platformReference || 'no reference'}` + (m.splitReason ? ` · split: ${SPLIT_REASON_LABELS[m.splitReason]}` : '')}
+          {`${STRUCTURE_LABELS[m.structure]} · ${m.platformReference || 'no reference'}` +
+            (m.splitReason ? ` · split: ${SPLIT_REASON_LABELS[m.splitReason]}` : '')}
         </Text>
       ))}
       {record.gaps.length ? <Text variant="label">Coverage gaps</Text> : null}
       {record.gaps.map((g) => (
-        <Text key={g.key} variant="small">{`${g.location} · ${GAP_CAUSE_LABELS[g.cause]} · ${g.resolved ? 'resolved' : 'NOT resolved'}${g.note ? ` · ${g.note}` : ''}`}</Text>
+        <Text
+          key={g.key}
+          variant="small"
+        >{`${g.location} · ${GAP_CAUSE_LABELS[g.cause]} · ${g.resolved ? 'resolved' : 'NOT resolved'}${g.note ? ` · ${g.note}` : ''}`}</Text>
       ))}
       {record.damageAreas.length ? <Text variant="label">Damage areas</Text> : null}
       {record.damageAreas.map((d) => (
@@ -64,7 +83,9 @@ export function RecordView({ record }: { record: CaptureRecord }) {
           {`${record.rooms.find((r) => r.key === d.roomKey)?.name ?? 'Room'}: ${d.description} · stations ${d.stationNumbers.join(', ') || 'none'} · ${d.photoFileIds.length} photo(s)`}
         </Text>
       ))}
-      {record.safety.hazards.length ? <Fact label="Hazards met" value={record.safety.hazards.map((h) => HAZARD_LABELS[h]).join(', ')} /> : null}
+      {record.safety.hazards.length ? (
+        <Fact label="Hazards met" value={record.safety.hazards.map((h) => HAZARD_LABELS[h]).join(', ')} />
+      ) : null}
       {record.notes ? <Fact label="Notes" value={record.notes} /> : null}
     </View>
   );

@@ -1,5 +1,5 @@
-import { JOB_STATUS_LABELS, type JobStatus } from '@/shared/jobs';
 import { Badge, type BadgeTone } from '@/components/ui/badge';
+import { JOB_STATUS_LABELS, type JobStatus } from '@/shared/jobs';
 
 const TONE: Record<JobStatus, BadgeTone> = {
   draft: 'neutral',

@@ -1,12 +1,19 @@
 import { Pressable, ScrollView, StyleSheet } from 'react-native';
-import { JOB_STATUS_LABELS, JOB_STATUSES, type JobStatus } from '@/shared/jobs';
+
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { JOB_STATUS_LABELS, JOB_STATUSES, type JobStatus } from '@/shared/jobs';
 
 export function StatusFilter({ value, onChange }: { value: JobStatus | null; onChange: (status: JobStatus | null) => void }) {
   const options: (JobStatus | null)[] = [null, ...JOB_STATUSES];
   return (
-    <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.row} role="radiogroup" aria-label="Filter by status">
+    <ScrollView
+      horizontal
+      showsHorizontalScrollIndicator={false}
+      contentContainerStyle={styles.row}
+      role="radiogroup"
+      aria-label="Filter by status"
+    >
       {options.map((status) => {
         const selected = status === value;
         return (
@@ -28,7 +35,14 @@ export function StatusFilter({ value, onChange }: { value: JobStatus | null; onC
 
 const styles = StyleSheet.create({
   row: { gap: space.sm, paddingVertical: space.xs },
-  chip: { borderWidth: 1, borderColor: colors.muted, borderRadius: 16, paddingHorizontal: space.md, paddingVertical: 6, backgroundColor: colors.surface },
+  chip: {
+    borderWidth: 1,
+    borderColor: colors.muted,
+    borderRadius: 16,
+    paddingHorizontal: space.md,
+    paddingVertical: 6,
+    backgroundColor: colors.surface,
+  },
   selected: { backgroundColor: colors.ink, borderColor: colors.ink },
   text: { fontFamily: fonts.regular, fontSize: 14, color: colors.ink },
   selectedText: { color: colors.surface, fontFamily: fonts.semibold },

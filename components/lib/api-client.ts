@@ -36,7 +36,12 @@ async function request<T>(method: Method, path: string, body?: unknown): Promise
   const payload = await response.json().catch(() => null);
   if (!response.ok) {
     const error = (payload as ApiErrorBody | null)?.error;
-    throw new ApiError(response.status, error?.code ?? 'http_error', error?.message ?? `Request failed (${response.status}).`, error?.fields);
+    throw new ApiError(
+      response.status,
+      error?.code ?? 'http_error',
+      error?.message ?? `Request failed (${response.status}).`,
+      error?.fields,
+    );
   }
   return payload as T;
 }

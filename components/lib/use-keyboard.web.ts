@@ -1,4 +1,5 @@
 import { useEffect, useRef } from 'react';
+
 import type { KeyHandlers } from './use-keyboard';
 
 export type { KeyHandlers };
@@ -9,7 +10,9 @@ const TYPING = new Set(['INPUT', 'TEXTAREA', 'SELECT']);
 // and never fire with Ctrl, Alt or Meta held, so browser shortcuts keep working.
 export function useKeyboard(handlers: KeyHandlers, enabled = true) {
   const latest = useRef(handlers);
-  latest.current = handlers;
+  useEffect(() => {
+    latest.current = handlers;
+  });
   useEffect(() => {
     if (!enabled) return;
     const onKey = (event: KeyboardEvent) => {

@@ -1,11 +1,13 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
+
 import { formatDateTime } from '@/components/lib/format';
 import { useMailboxQuery } from '@/components/queries/mailbox';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+
 import { MessageBody } from './message-body';
 
 // What the local fake SMTP server received: how people check Sightline's e-mail without a
@@ -24,8 +26,14 @@ export function MailboxScreen() {
       <View style={[{ gap: space.md }, wide && { flexDirection: 'row', alignItems: 'flex-start' }]}>
         <View style={[styles.list, wide && { width: 420 }]} role="list" aria-label="Messages">
           {messages.map((m) => (
-            <Pressable key={m.id} role="listitem" accessibilityLabel={`Open message ${m.subject}`} aria-current={open?.id === m.id}
-              onPress={() => setOpenId(m.id)} style={[styles.row, open?.id === m.id && styles.rowOpen]}>
+            <Pressable
+              key={m.id}
+              role="listitem"
+              accessibilityLabel={`Open message ${m.subject}`}
+              aria-current={open?.id === m.id}
+              onPress={() => setOpenId(m.id)}
+              style={[styles.row, open?.id === m.id && styles.rowOpen]}
+            >
               <Text style={{ fontFamily: fonts.semibold }}>{m.subject}</Text>
               <Text variant="muted">{`To ${m.to.join(', ')} · ${formatDateTime(m.receivedAt)}`}</Text>
             </Pressable>
@@ -33,11 +41,15 @@ export function MailboxScreen() {
         </View>
         {open ? (
           <View style={[styles.viewer, wide && { flex: 1 }]}>
-            <Text variant="heading" role="heading" aria-level={2}>{open.subject}</Text>
+            <Text variant="heading" role="heading" aria-level={2}>
+              {open.subject}
+            </Text>
             <Text variant="muted">{`From ${open.from} to ${open.to.join(', ')} · ${formatDateTime(open.receivedAt)}`}</Text>
             <MessageBody html={open.html} text={open.text} title={open.subject} />
             <Text variant="label">Plain-text part</Text>
-            <Text variant="small" style={{ fontFamily: fonts.regular }}>{open.text}</Text>
+            <Text variant="small" style={{ fontFamily: fonts.regular }}>
+              {open.text}
+            </Text>
           </View>
         ) : null}
       </View>

@@ -16,13 +16,17 @@ export function useClaimMutation() {
 
 export function useReleaseMutation() {
   const queryClient = useQueryClient();
-  return useMutation({ mutationFn: (jobId: number) => api.delete<void>(`/api/jobs/${jobId}/claim`), onSettled: () => invalidateReviewWork(queryClient) });
+  return useMutation({
+    mutationFn: (jobId: number) => api.delete<void>(`/api/jobs/${jobId}/claim`),
+    onSettled: () => invalidateReviewWork(queryClient),
+  });
 }
 
 export function useReassignMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: { toReviewerId: number; fromReviewerId?: number; jobIds?: number[] }) => api.post<{ moved: number }>('/api/claims/reassign', input),
+    mutationFn: (input: { toReviewerId: number; fromReviewerId?: number; jobIds?: number[] }) =>
+      api.post<{ moved: number }>('/api/claims/reassign', input),
     onSettled: () => invalidateReviewWork(queryClient),
   });
 }

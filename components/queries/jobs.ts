@@ -26,7 +26,10 @@ export function invalidateJobs(queryClient: QueryClient) {
 }
 
 export function useJobsQuery(filters: JobFilters) {
-  const parts = [filters.status?.length ? `status=${filters.status.join(',')}` : '', filters.technicianId ? `technicianId=${filters.technicianId}` : ''].filter(Boolean);
+  const parts = [
+    filters.status?.length ? `status=${filters.status.join(',')}` : '',
+    filters.technicianId ? `technicianId=${filters.technicianId}` : '',
+  ].filter(Boolean);
   const search = parts.length ? `?${parts.join('&')}` : '';
   return useQuery({
     queryKey: jobKeys.list(filters),
@@ -55,7 +58,9 @@ export function useStationAnalysisQuery(jobId: number, revision: number | null, 
   return useQuery({
     queryKey: jobKeys.stations(jobId, revision),
     queryFn: () =>
-      api.get<{ analysis: StationAnalysis | null; units: 'ft' | 'm' }>(`/api/jobs/${jobId}/station-analysis${revision ? `?revision=${revision}` : ''}`),
+      api.get<{ analysis: StationAnalysis | null; units: 'ft' | 'm' }>(
+        `/api/jobs/${jobId}/station-analysis${revision ? `?revision=${revision}` : ''}`,
+      ),
     enabled,
   });
 }
@@ -73,7 +78,8 @@ export function useJobCreateMutation() {
 export function useJobUpdateMutation(jobId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (changes: { technicianId?: number; priority?: Priority; dueAt?: string }) => api.patch<{ job: JobSummary }>(`/api/jobs/${jobId}`, changes),
+    mutationFn: (changes: { technicianId?: number; priority?: Priority; dueAt?: string }) =>
+      api.patch<{ job: JobSummary }>(`/api/jobs/${jobId}`, changes),
     onSuccess: () => invalidateJobs(queryClient),
   });
 }

@@ -17,7 +17,10 @@ export function invalidateDisputes(queryClient: QueryClient) {
 }
 
 export function useReworkItemsQuery(jobId: number) {
-  return useQuery({ queryKey: reworkKeys.items(jobId), queryFn: async () => (await api.get<{ items: ReworkItemView[] }>(`/api/jobs/${jobId}/rework-items`)).items });
+  return useQuery({
+    queryKey: reworkKeys.items(jobId),
+    queryFn: async () => (await api.get<{ items: ReworkItemView[] }>(`/api/jobs/${jobId}/rework-items`)).items,
+  });
 }
 
 export function useReworkAnswerMutation(jobId: number) {
@@ -30,7 +33,11 @@ export function useReworkAnswerMutation(jobId: number) {
 }
 
 export function useDisputesQuery(enabled: boolean) {
-  return useQuery({ queryKey: reworkKeys.disputes, queryFn: async () => (await api.get<{ disputes: Dispute[] }>('/api/disputes')).disputes, enabled });
+  return useQuery({
+    queryKey: reworkKeys.disputes,
+    queryFn: async () => (await api.get<{ disputes: Dispute[] }>('/api/disputes')).disputes,
+    enabled,
+  });
 }
 
 export function useDisputeDecisionMutation() {

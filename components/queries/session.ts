@@ -1,6 +1,7 @@
-import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import type { SessionUser } from '@/shared/api-types';
+import { type QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
 import { api, ApiError } from '@/components/lib/api-client';
+import type { SessionUser } from '@/shared/api-types';
 
 export const sessionKeys = { root: ['session'] as const };
 

@@ -9,5 +9,8 @@ import { jobKeys } from './jobs';
 export const timelineKeys = { of: (jobId: number) => [...jobKeys.detail(jobId), 'timeline'] as const };
 
 export function useTimelineQuery(jobId: number) {
-  return useQuery({ queryKey: timelineKeys.of(jobId), queryFn: async () => (await api.get<{ events: TimelineEvent[] }>(`/api/jobs/${jobId}/timeline`)).events });
+  return useQuery({
+    queryKey: timelineKeys.of(jobId),
+    queryFn: async () => (await api.get<{ events: TimelineEvent[] }>(`/api/jobs/${jobId}/timeline`)).events,
+  });
 }

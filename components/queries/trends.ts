@@ -1,6 +1,7 @@
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import type { Calibration, ReviewerRow, TeamRow, TechnicianTrends } from '@/shared/trends';
+
 import { api } from '@/components/lib/api-client';
+import type { Calibration, ReviewerRow, TeamRow, TechnicianTrends } from '@/shared/trends';
 
 export type Period = { from: string; to: string; rubricVersion?: string };
 
@@ -13,7 +14,12 @@ export const periodSearch = (p: Period, extra: Record<string, string | number | 
 export const trendKeys = { root: ['trends'] as const, of: (kind: string, search: string) => [...trendKeys.root, kind, search] as const };
 
 function useTrend<T>(kind: string, path: string, search: string, enabled = true) {
-  return useQuery({ queryKey: trendKeys.of(kind, search), queryFn: () => api.get<T>(`${path}?${search}`), placeholderData: keepPreviousData, enabled });
+  return useQuery({
+    queryKey: trendKeys.of(kind, search),
+    queryFn: () => api.get<T>(`${path}?${search}`),
+    placeholderData: keepPreviousData,
+    enabled,
+  });
 }
 
 export const useTechnicianTrendsQuery = (search: string) => useTrend<TechnicianTrends>('technician', '/api/trends', search);

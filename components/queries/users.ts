@@ -1,7 +1,8 @@
 import { type QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+
+import { api } from '@/components/lib/api-client';
 import type { UserRow } from '@/shared/api-types';
 import type { Role } from '@/shared/roles';
-import { api } from '@/components/lib/api-client';
 
 export const userKeys = { root: ['users'] as const, list: () => [...userKeys.root, 'list'] as const };
 

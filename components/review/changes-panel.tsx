@@ -1,8 +1,9 @@
 import { StyleSheet, View } from 'react-native';
-import { REWORK_RESPONSE_LABELS, type Workspace } from '@/shared/review';
+
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { REWORK_RESPONSE_LABELS, type Workspace } from '@/shared/review';
 
 const KIND_WORD = { added: 'Added', removed: 'Removed', changed: 'Changed' } as const;
 
@@ -12,16 +13,21 @@ export function ChangesPanel({ previous, currentRevision }: { previous: NonNulla
     <View style={styles.card} role="region" aria-label="Changes since the last review">
       <Text variant="heading" role="heading" aria-level={2}>{`Resubmission: revision ${previous.revision} → ${currentRevision}`}</Text>
       <Text variant="muted">{`Revision ${previous.revision} scored ${previous.score ?? '–'}.`}</Text>
-      {previous.items.length ? <Text variant="label">Technician's answers</Text> : null}
+      {previous.items.length ? <Text variant="label">Technician&apos;s answers</Text> : null}
       {previous.items.map((item) => (
         <View key={item.id} style={styles.item}>
           <View style={styles.head}>
             <Text style={{ fontFamily: fonts.semibold, flexShrink: 1 }}>{item.title}</Text>
-            <Badge label={item.response ? REWORK_RESPONSE_LABELS[item.response] : 'Not answered'} tone={item.response === 'fixed' ? 'pass' : item.response ? 'rework' : 'fail'} />
+            <Badge
+              label={item.response ? REWORK_RESPONSE_LABELS[item.response] : 'Not answered'}
+              tone={item.response === 'fixed' ? 'pass' : item.response ? 'rework' : 'fail'}
+            />
           </View>
           <Text variant="small">{`Asked: ${item.instruction}`}</Text>
           {item.responseNote ? <Text variant="small">{`Answer: ${item.responseNote}`}</Text> : null}
-          {item.responseFileIds.length ? <Text variant="small">{`Files attached to the answer: ${item.responseFileIds.map((id) => `#${id}`).join(', ')} (see Files)`}</Text> : null}
+          {item.responseFileIds.length ? (
+            <Text variant="small">{`Files attached to the answer: ${item.responseFileIds.map((id) => `#${id}`).join(', ')} (see Files)`}</Text>
+          ) : null}
         </View>
       ))}
       <Text variant="label">{`What changed (${previous.changes.length})`}</Text>

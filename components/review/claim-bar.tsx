@@ -29,14 +29,22 @@ export function ClaimBar({ workspace, holdsClaim }: { workspace: Workspace; hold
     return (
       <View style={styles.claimBar}>
         <Text>{`You hold the claim${until}.`}</Text>
-        <Button label="Release claim" tone="secondary" onPress={() => release.mutate(job.id, { onSuccess: () => router.replace('/queue') })} />
+        <Button
+          label="Release claim"
+          tone="secondary"
+          onPress={() => release.mutate(job.id, { onSuccess: () => router.replace('/queue') })}
+        />
       </View>
     );
   }
   return (
     <View style={styles.claimBar}>
       <Text>
-        {second !== null ? 'Claim this blind review before scoring it.' : job.claimedBy ? `Claimed by ${job.claimedBy.name}.` : 'Nobody has claimed this job yet.'}
+        {second !== null
+          ? 'Claim this blind review before scoring it.'
+          : job.claimedBy
+            ? `Claimed by ${job.claimedBy.name}.`
+            : 'Nobody has claimed this job yet.'}
       </Text>
       {me?.role === 'reviewer' ? (
         <Button

@@ -1,10 +1,11 @@
 import { useEffect, useRef } from 'react';
 import { Pressable, StyleSheet, TextInput, View } from 'react-native';
-import { scaleMax, type Criterion } from '@/shared/rubric';
-import { isBelowFullMarks } from '@/shared/scoring';
+
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { type Criterion, scaleMax } from '@/shared/rubric';
+import { isBelowFullMarks } from '@/shared/scoring';
 
 export type CriterionEntry = { score: number | null | undefined; stockReason: string | null; comment: string };
 
@@ -24,9 +25,13 @@ type Props = {
 
 export function CriterionRow({ criterion, applies, entry, current, carriedFrom, suggestions = [], error, onChange, onFocus }: Props) {
   const max = scaleMax(criterion.scale);
-  const choices = criterion.scale.kind === 'levels'
-    ? criterion.scale.levels.map((label, value) => ({ value, short: String(value), label: `${value}: ${label}` }))
-    : [{ value: 0, short: 'Fail', label: 'Fail' }, { value: 1, short: 'Pass', label: 'Pass' }];
+  const choices =
+    criterion.scale.kind === 'levels'
+      ? criterion.scale.levels.map((label, value) => ({ value, short: String(value), label: `${value}: ${label}` }))
+      : [
+          { value: 0, short: 'Fail', label: 'Fail' },
+          { value: 1, short: 'Pass', label: 'Pass' },
+        ];
   const needsComment = isBelowFullMarks(criterion, entry.score);
   const ref = useRef<View>(null);
   // Keyboard scoring moves the current criterion; keep it on screen (web only: a DOM node).
@@ -35,9 +40,17 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
   }, [current]);
 
   return (
-    <View ref={ref} style={[styles.row, current && styles.current]} role="group" aria-label={criterion.title} aria-current={current ? 'step' : undefined}>
+    <View
+      ref={ref}
+      style={[styles.row, current && styles.current]}
+      role="group"
+      aria-label={criterion.title}
+      aria-current={current ? 'step' : undefined}
+    >
       <Pressable onPress={onFocus} accessibilityLabel={`Go to ${criterion.title}`} style={styles.head}>
-        <Text variant="label" style={{ flexShrink: 1 }}>{criterion.title}</Text>
+        <Text variant="label" style={{ flexShrink: 1 }}>
+          {criterion.title}
+        </Text>
         <View style={styles.badges}>
           {criterion.critical ? <Badge label="Critical" tone="fail" /> : null}
           <Badge label={`Weight ${criterion.weight}`} />
@@ -52,15 +65,28 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
             {choices.map((choice) => {
               const selected = entry.score === choice.value;
               return (
-                <Pressable key={choice.value} role="radio" aria-checked={selected} accessibilityLabel={`${criterion.title}: ${choice.label}`}
-                  onPress={() => { onFocus(); onChange({ ...entry, score: choice.value }); }}
-                  style={[styles.choice, selected && styles.choiceSelected]}>
+                <Pressable
+                  key={choice.value}
+                  role="radio"
+                  aria-checked={selected}
+                  accessibilityLabel={`${criterion.title}: ${choice.label}`}
+                  onPress={() => {
+                    onFocus();
+                    onChange({ ...entry, score: choice.value });
+                  }}
+                  style={[styles.choice, selected && styles.choiceSelected]}
+                >
                   <Text style={[styles.choiceText, selected && { color: colors.surface }]}>{choice.short}</Text>
                 </Pressable>
               );
             })}
           </View>
-          {carriedFrom ? <Text variant="small" style={{ color: colors.rework }}>{`Carried over from revision ${carriedFrom}: its inputs did not change. Confirm or change it.`}</Text> : null}
+          {carriedFrom ? (
+            <Text
+              variant="small"
+              style={{ color: colors.rework }}
+            >{`Carried over from revision ${carriedFrom}: its inputs did not change. Confirm or change it.`}</Text>
+          ) : null}
           {entry.score !== undefined && entry.score !== null && criterion.scale.kind === 'levels' ? (
             <Text variant="small">{`${entry.score} of ${max}: ${criterion.scale.levels[entry.score]}`}</Text>
           ) : null}
@@ -71,10 +97,17 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
                   {criterion.stockReasons.map((reason) => {
                     const selected = entry.stockReason === reason;
                     return (
-                      <Pressable key={reason} role="radio" aria-checked={selected} accessibilityLabel={reason}
+                      <Pressable
+                        key={reason}
+                        role="radio"
+                        aria-checked={selected}
+                        accessibilityLabel={reason}
                         onPress={() => onChange({ ...entry, stockReason: selected ? null : reason })}
-                        style={[styles.reason, selected && styles.choiceSelected]}>
-                        <Text variant="small" style={selected ? { color: colors.surface } : undefined}>{reason}</Text>
+                        style={[styles.reason, selected && styles.choiceSelected]}
+                      >
+                        <Text variant="small" style={selected ? { color: colors.surface } : undefined}>
+                          {reason}
+                        </Text>
                       </Pressable>
                     );
                   })}
@@ -95,14 +128,23 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
           {suggestions.length ? (
             <View style={styles.suggestions} role="note" aria-label={`Suggested comments for ${criterion.title}`}>
               <Text variant="label">From the station analysis (suggested, not scored):</Text>
-              {suggestions.map((s) => <Text key={s} variant="small">{`• ${s}`}</Text>)}
-              <Pressable role="button" accessibilityLabel={`Use the suggested comments for ${criterion.title}`}
-                onPress={() => onChange({ ...entry, comment: [entry.comment.trim(), ...suggestions].filter(Boolean).join(' ') })}>
+              {suggestions.map((s) => (
+                <Text key={s} variant="small">{`• ${s}`}</Text>
+              ))}
+              <Pressable
+                role="button"
+                accessibilityLabel={`Use the suggested comments for ${criterion.title}`}
+                onPress={() => onChange({ ...entry, comment: [entry.comment.trim(), ...suggestions].filter(Boolean).join(' ') })}
+              >
                 <Text style={{ color: colors.accent, fontFamily: fonts.semibold }}>Use as comment</Text>
               </Pressable>
             </View>
           ) : null}
-          {error ? <Text role="alert" style={{ color: colors.fail }}>{error}</Text> : null}
+          {error ? (
+            <Text role="alert" style={{ color: colors.fail }}>
+              {error}
+            </Text>
+          ) : null}
         </>
       )}
     </View>
@@ -115,11 +157,30 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', justifyContent: 'space-between', gap: space.sm, alignItems: 'center' },
   badges: { flexDirection: 'row', gap: space.xs },
   choices: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
-  choice: { minWidth: 44, minHeight: 36, borderWidth: 1, borderColor: colors.ink, borderRadius: 4, alignItems: 'center', justifyContent: 'center', paddingHorizontal: space.sm },
+  choice: {
+    minWidth: 44,
+    minHeight: 36,
+    borderWidth: 1,
+    borderColor: colors.ink,
+    borderRadius: 4,
+    alignItems: 'center',
+    justifyContent: 'center',
+    paddingHorizontal: space.sm,
+  },
   choiceSelected: { backgroundColor: colors.ink },
   choiceText: { fontFamily: fonts.semibold, color: colors.ink },
   reason: { borderWidth: 1, borderColor: colors.muted, borderRadius: 12, paddingHorizontal: space.sm, paddingVertical: 4 },
-  comment: { minHeight: 64, borderWidth: 1, borderColor: colors.muted, borderRadius: 6, padding: space.sm, fontFamily: fonts.regular, fontSize: 15, color: colors.ink, backgroundColor: colors.surface },
+  comment: {
+    minHeight: 64,
+    borderWidth: 1,
+    borderColor: colors.muted,
+    borderRadius: 6,
+    padding: space.sm,
+    fontFamily: fonts.regular,
+    fontSize: 15,
+    color: colors.ink,
+    backgroundColor: colors.surface,
+  },
   suggestions: { backgroundColor: '#FBF3EE', borderRadius: 4, padding: space.sm, gap: 2 },
   commentMissing: { borderColor: colors.rework, borderWidth: 2 },
 });

@@ -1,25 +1,52 @@
-import type { QueueRow } from '@/shared/review';
-import { CAMERA_CLASS_LABELS } from '@/shared/capture-record';
-import { describeDue, humanSpan, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
 import { StatusBadge } from '@/components/jobs/status-badge';
 import type { DataTableColumn } from '@/components/ui/data-table';
 import { Text } from '@/components/ui/text';
 import { colors, fonts } from '@/components/ui/theme';
+import { CAMERA_CLASS_LABELS } from '@/shared/capture-record';
+import { describeDue, humanSpan, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
+import type { QueueRow } from '@/shared/review';
 
 export function queueColumns(now: Date, meId: number | undefined): DataTableColumn<QueueRow>[] {
   return [
     { id: 'claim', accessorKey: 'claimReference', header: 'Claim', meta: { width: 130 } },
     { id: 'technician', accessorFn: (r) => r.technician.name, header: 'Technician', meta: { width: 160 } },
-    { id: 'propertyType', accessorFn: (r) => PROPERTY_TYPE_LABELS[r.propertyType], header: 'Property', enableSorting: false, meta: { width: 130 } },
-    { id: 'lossType', accessorFn: (r) => LOSS_TYPE_LABELS[r.lossType], header: 'Loss', enableSorting: false, meta: { width: 80 } },
-    { id: 'cameraClass', accessorFn: (r) => (r.cameraClass ? CAMERA_CLASS_LABELS[r.cameraClass] : '–'), header: 'Camera', enableSorting: false, meta: { width: 170 } },
-    { id: 'revision', accessorFn: (r) => (r.revision > 1 ? `Resubmission (rev ${r.revision})` : 'First (rev 1)'), header: 'Revision', meta: { width: 170 } },
     {
-      id: 'submitted', accessorKey: 'submittedAt', header: 'Submitted', meta: { width: 150 },
-      cell: ({ row }) => <Text variant="small">{row.original.submittedAt ? `${humanSpan(now.getTime() - new Date(row.original.submittedAt).getTime())} ago` : '–'}</Text>,
+      id: 'propertyType',
+      accessorFn: (r) => PROPERTY_TYPE_LABELS[r.propertyType],
+      header: 'Property',
+      enableSorting: false,
+      meta: { width: 130 },
+    },
+    { id: 'lossType', accessorFn: (r) => LOSS_TYPE_LABELS[r.lossType], header: 'Loss', enableSorting: false, meta: { width: 80 } },
+    {
+      id: 'cameraClass',
+      accessorFn: (r) => (r.cameraClass ? CAMERA_CLASS_LABELS[r.cameraClass] : '–'),
+      header: 'Camera',
+      enableSorting: false,
+      meta: { width: 170 },
     },
     {
-      id: 'due', accessorKey: 'dueAt', header: 'Due / time left', meta: { width: 190 },
+      id: 'revision',
+      accessorFn: (r) => (r.revision > 1 ? `Resubmission (rev ${r.revision})` : 'First (rev 1)'),
+      header: 'Revision',
+      meta: { width: 170 },
+    },
+    {
+      id: 'submitted',
+      accessorKey: 'submittedAt',
+      header: 'Submitted',
+      meta: { width: 150 },
+      cell: ({ row }) => (
+        <Text variant="small">
+          {row.original.submittedAt ? `${humanSpan(now.getTime() - new Date(row.original.submittedAt).getTime())} ago` : '–'}
+        </Text>
+      ),
+    },
+    {
+      id: 'due',
+      accessorKey: 'dueAt',
+      header: 'Due / time left',
+      meta: { width: 190 },
       cell: ({ row }) => {
         const due = describeDue(row.original.dueAt, now, false);
         const paused = row.original.waitingOn === 'technician';
@@ -32,7 +59,11 @@ export function queueColumns(now: Date, meId: number | undefined): DataTableColu
     },
     { id: 'priority', accessorFn: (r) => PRIORITY_LABELS[r.priority], header: 'Priority', meta: { width: 150 } },
     {
-      id: 'status', accessorKey: 'status', header: 'State · whose turn', enableSorting: false, meta: { width: 230 },
+      id: 'status',
+      accessorKey: 'status',
+      header: 'State · whose turn',
+      enableSorting: false,
+      meta: { width: 230 },
       cell: ({ row }) => (
         <>
           <StatusBadge status={row.original.status} />
@@ -41,8 +72,16 @@ export function queueColumns(now: Date, meId: number | undefined): DataTableColu
       ),
     },
     {
-      id: 'claimedBy', accessorFn: (r) => r.claimedBy?.name ?? '', header: 'Claimed by', enableSorting: false, meta: { width: 160 },
-      cell: ({ row }) => <Text variant="small">{row.original.claimedBy ? (row.original.claimedBy.id === meId ? 'You' : row.original.claimedBy.name) : 'Nobody'}</Text>,
+      id: 'claimedBy',
+      accessorFn: (r) => r.claimedBy?.name ?? '',
+      header: 'Claimed by',
+      enableSorting: false,
+      meta: { width: 160 },
+      cell: ({ row }) => (
+        <Text variant="small">
+          {row.original.claimedBy ? (row.original.claimedBy.id === meId ? 'You' : row.original.claimedBy.name) : 'Nobody'}
+        </Text>
+      ),
     },
   ];
 }

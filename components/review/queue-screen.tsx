@@ -1,15 +1,14 @@
+import type { SortingState } from '@tanstack/react-table';
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { useMemo, useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
-import type { SortingState } from '@tanstack/react-table';
-import { JOB_STATUS_LABELS } from '@/shared/jobs';
-import { queueSearch, QUEUE_PARAM_KEYS, type QueueParams } from '@/shared/queue-params';
-import type { QueueRow, QueueSort } from '@/shared/review';
+
 import { useKeyboard } from '@/components/lib/use-keyboard';
-import { useTechniciansQuery } from '@/components/queries/technicians';
 import { useClaimMutation } from '@/components/queries/claims';
 import { useQueueQuery } from '@/components/queries/queue';
 import { useSessionQuery } from '@/components/queries/session';
+import { useTechniciansQuery } from '@/components/queries/technicians';
+import { DisputesPanel } from '@/components/rework/disputes-panel';
 import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
 import { HelpOverlay } from '@/components/ui/help-overlay';
@@ -17,9 +16,12 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+import { JOB_STATUS_LABELS } from '@/shared/jobs';
+import { QUEUE_PARAM_KEYS, type QueueParams, queueSearch } from '@/shared/queue-params';
+import type { QueueRow, QueueSort } from '@/shared/review';
+
 import { queueColumns } from './queue-columns';
 import { QueueFilters } from './queue-filters';
-import { DisputesPanel } from '@/components/rework/disputes-panel';
 import { ReassignPanel } from './reassign-panel';
 import { SecondReviewList } from './second-review-list';
 
@@ -36,7 +38,10 @@ export function QueueScreen() {
   const router = useRouter();
   const { data: me } = useSessionQuery();
   const raw = useLocalSearchParams<QueueParams>();
-  const params = useMemo(() => Object.fromEntries(QUEUE_PARAM_KEYS.map((k) => [k, typeof raw[k] === 'string' ? raw[k] : ''])) as QueueParams, [raw]);
+  const params = useMemo(
+    () => Object.fromEntries(QUEUE_PARAM_KEYS.map((k) => [k, typeof raw[k] === 'string' ? raw[k] : ''])) as QueueParams,
+    [raw],
+  );
   const search = queueSearch(params);
   const queue = useQueueQuery(search);
   const technicians = useTechniciansQuery();
@@ -53,23 +58,37 @@ export function QueueScreen() {
   const open = (row: QueueRow | undefined) => row && router.push(`/queue/${row.id}` as never);
   const claimAndOpen = async (row: QueueRow | undefined) => {
     if (!row || !isReviewer) return;
-    await claim.mutateAsync(row.id).then(() => open(row)).catch(() => undefined);
+    await claim
+      .mutateAsync(row.id)
+      .then(() => open(row))
+      .catch(() => undefined);
   };
 
-  useKeyboard({
-    ArrowDown: (e) => { e.preventDefault(); setSelected((i) => Math.min(i + 1, rows.length - 1)); },
-    j: () => setSelected((i) => Math.min(i + 1, rows.length - 1)),
-    ArrowUp: (e) => { e.preventDefault(); setSelected((i) => Math.max(i - 1, 0)); },
-    k: () => setSelected((i) => Math.max(i - 1, 0)),
-    Enter: () => open(rows[selected]),
-    c: () => void claimAndOpen(rows[selected]),
-    ']': () => page < pages && setParams({ page: String(page + 1) }),
-    '[': () => page > 1 && setParams({ page: String(page - 1) }),
-    '?': () => setHelp((h) => !h),
-  }, !help);
+  useKeyboard(
+    {
+      ArrowDown: (e) => {
+        e.preventDefault();
+        setSelected((i) => Math.min(i + 1, rows.length - 1));
+      },
+      j: () => setSelected((i) => Math.min(i + 1, rows.length - 1)),
+      ArrowUp: (e) => {
+        e.preventDefault();
+        setSelected((i) => Math.max(i - 1, 0));
+      },
+      k: () => setSelected((i) => Math.max(i - 1, 0)),
+      Enter: () => open(rows[selected]),
+      c: () => void claimAndOpen(rows[selected]),
+      ']': () => page < pages && setParams({ page: String(page + 1) }),
+      '[': () => page > 1 && setParams({ page: String(page - 1) }),
+      '?': () => setHelp((h) => !h),
+    },
+    !help,
+  );
 
   const sorting: SortingState = params.sort ? [{ id: params.sort === 'claim' ? 'claim' : params.sort, desc: params.dir === 'desc' }] : [];
-  const columns = useMemo(() => queueColumns(new Date(), me?.id), [me?.id, queue.dataUpdatedAt]);
+  // Due times are shown relative to when the page was fetched.
+  const fetchedAt = queue.dataUpdatedAt;
+  const columns = useMemo(() => queueColumns(new Date(fetchedAt), me?.id), [me?.id, fetchedAt]);
   const counts = queue.data?.counts ?? {};
 
   return (
@@ -79,7 +98,9 @@ export function QueueScreen() {
       actions={wide ? <Button label="Keyboard keys (?)" tone="secondary" onPress={() => setHelp(true)} /> : null}
     >
       <Text role="status">
-        {(['submitted', 'resubmitted', 'in_review', 'rework_requested'] as const).map((s) => `${JOB_STATUS_LABELS[s]}: ${counts[s] ?? 0}`).join(' · ')}
+        {(['submitted', 'resubmitted', 'in_review', 'rework_requested'] as const)
+          .map((s) => `${JOB_STATUS_LABELS[s]}: ${counts[s] ?? 0}`)
+          .join(' · ')}
       </Text>
       <QueueFilters params={params} technicians={technicians.data ?? []} onChange={setParams} />
       {queue.error ? <Notice tone="error">{queue.error.message}</Notice> : null}
@@ -93,7 +114,9 @@ export function QueueScreen() {
         onRowPress={open}
         selectedRowId={rows[selected] ? String(rows[selected].id) : null}
         sorting={sorting}
-        onSortingChange={(next) => setParams({ sort: (next[0]?.id as QueueSort | undefined) ?? '', dir: next[0]?.desc ? 'desc' : 'asc', page: '' })}
+        onSortingChange={(next) =>
+          setParams({ sort: (next[0]?.id as QueueSort | undefined) ?? '', dir: next[0]?.desc ? 'desc' : 'asc', page: '' })
+        }
       />
       <View style={styles.pager}>
         <Button label="Previous page" tone="secondary" disabled={page <= 1} onPress={() => setParams({ page: String(page - 1) })} />
@@ -103,7 +126,11 @@ export function QueueScreen() {
       {isReviewer && rows[selected] ? (
         <View style={styles.selectedBar}>
           <Text>{`Selected: ${rows[selected].claimReference}`}</Text>
-          <Button label={`Claim ${rows[selected].claimReference}`} onPress={() => void claimAndOpen(rows[selected])} busy={claim.isPending} />
+          <Button
+            label={`Claim ${rows[selected].claimReference}`}
+            onPress={() => void claimAndOpen(rows[selected])}
+            busy={claim.isPending}
+          />
         </View>
       ) : null}
       {isReviewer ? <SecondReviewList /> : null}
@@ -116,5 +143,13 @@ export function QueueScreen() {
 
 const styles = StyleSheet.create({
   pager: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
-  selectedBar: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap', borderTopWidth: 1, borderTopColor: colors.line, paddingTop: space.md },
+  selectedBar: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.md,
+    flexWrap: 'wrap',
+    borderTopWidth: 1,
+    borderTopColor: colors.line,
+    paddingTop: space.md,
+  },
 });

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+
 import { useReassignMutation } from '@/components/queries/claims';
 import { useReviewersQuery } from '@/components/queries/reviewers';
 import { Button } from '@/components/ui/button';
@@ -17,12 +18,19 @@ export function ReassignPanel() {
   const options = (reviewers.data ?? []).map((r) => ({ value: String(r.id), label: r.name }));
   return (
     <View style={styles.box} role="region" aria-label="Reassign claims">
-      <Text variant="heading" role="heading" aria-level={2}>Reassign claims</Text>
+      <Text variant="heading" role="heading" aria-level={2}>
+        Reassign claims
+      </Text>
       <View style={styles.row}>
         <Select label="From reviewer" value={from} options={options} onChange={setFrom} allLabel="Choose…" />
         <Select label="To reviewer" value={to} options={options.filter((o) => o.value !== from)} onChange={setTo} allLabel="Choose…" />
-        <Button label="Move their claims" tone="secondary" disabled={!from || !to} busy={reassign.isPending}
-          onPress={() => reassign.mutate({ fromReviewerId: Number(from), toReviewerId: Number(to) })} />
+        <Button
+          label="Move their claims"
+          tone="secondary"
+          disabled={!from || !to}
+          busy={reassign.isPending}
+          onPress={() => reassign.mutate({ fromReviewerId: Number(from), toReviewerId: Number(to) })}
+        />
       </View>
       {reassign.data ? <Notice tone="info">{`${reassign.data.moved} claim(s) moved.`}</Notice> : null}
       {reassign.error ? <Notice tone="error">{reassign.error.message}</Notice> : null}

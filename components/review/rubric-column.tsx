@@ -73,7 +73,9 @@ export function RubricColumn({ workspace, scores, current, onFocusCriterion, sti
           applies={applicable[criterion.key]}
           entry={entries[criterion.key]}
           suggestions={criterion.key === 'spacing' ? suggestions.spacing : criterion.key === 'registration' ? suggestions.registration : []}
-          carriedFrom={criterion.key in carried && entries[criterion.key].score === carried[criterion.key].score ? workspace.previous!.revision : null}
+          carriedFrom={
+            criterion.key in carried && entries[criterion.key].score === carried[criterion.key].score ? workspace.previous!.revision : null
+          }
           current={index === current}
           error={fieldErrors[`scores.${criterion.key}`] ?? fieldErrors[`scores.${criterion.key}.comment`]}
           onFocus={() => onFocusCriterion(index)}
@@ -88,7 +90,9 @@ export function RubricColumn({ workspace, scores, current, onFocusCriterion, sti
         error={fieldErrors.decision}
       />
       {acceptProblem ? <Notice tone="caution">A failing review cannot be accepted. Request rework or a recapture.</Notice> : null}
-      {submit.error instanceof ApiError && !Object.keys(submit.error.fields).length ? <Notice tone="error">{submit.error.message}</Notice> : null}
+      {submit.error instanceof ApiError && !Object.keys(submit.error.fields).length ? (
+        <Notice tone="error">{submit.error.message}</Notice>
+      ) : null}
       <Button
         label={second ? 'Save blind second review' : 'Record decision'}
         onPress={() => void onSubmit()}

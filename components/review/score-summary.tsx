@@ -1,7 +1,8 @@
 import { StyleSheet, View } from 'react-native';
-import type { Evaluation } from '@/shared/scoring';
+
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import type { Evaluation } from '@/shared/scoring';
 
 // The live total, and in words why a review passes or fails.
 export function ScoreSummary({ evaluation, passMark }: { evaluation: Evaluation; passMark: number }) {
@@ -20,6 +21,14 @@ export function ScoreSummary({ evaluation, passMark }: { evaluation: Evaluation;
 }
 
 const styles = StyleSheet.create({
-  box: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderLeftWidth: 6, borderRadius: 8, padding: space.md, gap: 2 },
+  box: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderLeftWidth: 6,
+    borderRadius: 8,
+    padding: space.md,
+    gap: 2,
+  },
   score: { fontFamily: fonts.bold, fontSize: 36, color: colors.ink },
 });

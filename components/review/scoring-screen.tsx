@@ -38,7 +38,9 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
 
   return (
     <View style={{ gap: space.md }}>
-      {second ? <Notice tone="info">Blind second review: the first reviewer&apos;s score is hidden. Your decision does not change the job.</Notice> : null}
+      {second ? (
+        <Notice tone="info">Blind second review: the first reviewer&apos;s score is hidden. Your decision does not change the job.</Notice>
+      ) : null}
       <ClaimBar workspace={workspace} holdsClaim={holdsClaim} />
       <View style={[styles.columns, wide && styles.wideColumns]}>
         <View style={[{ gap: space.md }, wide ? { flex: 1 } : undefined]}>
@@ -51,7 +53,9 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
           ) : null}
         </View>
         <View style={wide ? { flex: 1 } : undefined}>
-          {holdsClaim ? <RubricColumn workspace={workspace} scores={scores} current={current} onFocusCriterion={setCurrent} stickySummary={wide} /> : null}
+          {holdsClaim ? (
+            <RubricColumn workspace={workspace} scores={scores} current={current} onFocusCriterion={setCurrent} stickySummary={wide} />
+          ) : null}
         </View>
       </View>
       <HelpOverlay visible={help} title="Scoring keys" keys={SCORING_KEYS} onClose={() => setHelp(false)} />

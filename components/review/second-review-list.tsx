@@ -1,5 +1,6 @@
 import { useRouter } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
+
 import { formatDateTime } from '@/components/lib/format';
 import { useSecondReviewsQuery } from '@/components/queries/second-reviews';
 import { Button } from '@/components/ui/button';
@@ -13,12 +14,18 @@ export function SecondReviewList() {
   if (!list.data?.length) return null;
   return (
     <View style={styles.box} role="region" aria-label="Blind second reviews">
-      <Text variant="heading" role="heading" aria-level={2}>Blind second reviews</Text>
+      <Text variant="heading" role="heading" aria-level={2}>
+        Blind second reviews
+      </Text>
       <Text variant="muted">Score these without seeing the first review; they measure how well reviewers agree.</Text>
       {list.data.map((item) => (
         <View key={item.id} style={styles.row}>
           <Text>{`${item.claimReference} · revision ${item.revision} · drawn ${formatDateTime(item.createdAt)}`}</Text>
-          <Button label={`Score ${item.claimReference} blind`} tone="secondary" onPress={() => router.push(`/queue/${item.jobId}?second=${item.id}` as never)} />
+          <Button
+            label={`Score ${item.claimReference} blind`}
+            tone="secondary"
+            onPress={() => router.push(`/queue/${item.jobId}?second=${item.id}` as never)}
+          />
         </View>
       ))}
     </View>

@@ -34,7 +34,12 @@ export function useScoreSheet(workspace: Workspace) {
     setEntries((e) => ({ ...e, [criterion.key]: { ...e[criterion.key], score: value } }));
   };
   const scoreInputs = (): ScoreInput[] =>
-    rubric.criteria.map((c) => ({ key: c.key, score: entries[c.key].score ?? null, stockReason: entries[c.key].stockReason, comment: entries[c.key].comment }));
+    rubric.criteria.map((c) => ({
+      key: c.key,
+      score: entries[c.key].score ?? null,
+      stockReason: entries[c.key].stockReason,
+      comment: entries[c.key].comment,
+    }));
 
   return { entries, evaluation, setEntry, setScore, scoreInputs };
 }

@@ -1,12 +1,13 @@
 // Phone: compact header and a bottom tab bar. Wide screens (≥ 1024 px): a sidebar.
 import { Link, usePathname } from 'expo-router';
 import { Pressable, StyleSheet, useWindowDimensions, View } from 'react-native';
-import type { SessionUser } from '@/shared/api-types';
-import { navFor } from '@/shared/navigation';
-import { ROLE_LABELS } from '@/shared/roles';
+
 import { useSignOutMutation } from '@/components/queries/session';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+import type { SessionUser } from '@/shared/api-types';
+import { navFor } from '@/shared/navigation';
+import { ROLE_LABELS } from '@/shared/roles';
 
 export function AppShell({ user, children }: { user: SessionUser; children: React.ReactNode }) {
   const { width } = useWindowDimensions();
@@ -19,11 +20,18 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
   const navLinks = items.map((item) => {
     const current = isCurrent(item.href);
     return (
-      <View key={item.href + item.label} style={[wide ? styles.sideLink : styles.tab, current && (wide ? styles.sideLinkActive : styles.tabActive)]}>
+      <View
+        key={item.href + item.label}
+        style={[wide ? styles.sideLink : styles.tab, current && (wide ? styles.sideLinkActive : styles.tabActive)]}
+      >
         <Link
           href={item.href as never}
           aria-current={current ? 'page' : undefined}
-          style={StyleSheet.flatten([styles.navText, wide ? styles.sideText : styles.tabText, current && (wide ? styles.sideTextActive : styles.tabTextActive)])}
+          style={StyleSheet.flatten([
+            styles.navText,
+            wide ? styles.sideText : styles.tabText,
+            current && (wide ? styles.sideTextActive : styles.tabTextActive),
+          ])}
         >
           {item.label}
         </Link>
@@ -107,6 +115,13 @@ const styles = StyleSheet.create({
   sideTextActive: { color: colors.paper },
   userName: { fontFamily: fonts.semibold, fontSize: 14, color: colors.paper },
   userRole: { fontFamily: fonts.regular, fontSize: 13, color: '#C9CED6' },
-  signOut: { borderWidth: 1, borderColor: colors.paper, borderRadius: 6, paddingHorizontal: space.md, minHeight: 36, justifyContent: 'center' },
+  signOut: {
+    borderWidth: 1,
+    borderColor: colors.paper,
+    borderRadius: 6,
+    paddingHorizontal: space.md,
+    minHeight: 36,
+    justifyContent: 'center',
+  },
   signOutText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.paper },
 });

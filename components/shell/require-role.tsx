@@ -1,7 +1,7 @@
-import type { Role } from '@/shared/roles';
 import { useSessionQuery } from '@/components/queries/session';
-import { Screen } from '@/components/ui/screen';
 import { Notice } from '@/components/ui/notice';
+import { Screen } from '@/components/ui/screen';
+import type { Role } from '@/shared/roles';
 
 // Hides a page from roles that cannot use it. The server refuses them anyway.
 export function RequireRole({ roles, children }: { roles: Role[]; children: React.ReactNode }) {

@@ -1,4 +1,5 @@
 import { Linking, Pressable } from 'react-native';
+
 import { Text } from '@/components/ui/text';
 import { colors, fonts } from '@/components/ui/theme';
 

@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+
 import { useRubricsQuery } from '@/components/queries/rubrics';
 import type { Period } from '@/components/queries/trends';
 import { ChoiceField } from '@/components/ui/choice-field';
@@ -17,7 +18,12 @@ export function periodFor(weeks: number): Period {
   return { from: from.toISOString().slice(0, 10), to: to.toISOString().slice(0, 10) };
 }
 
-export function PeriodPicker({ weeks, rubricVersion, onChange, showRubric = true }: {
+export function PeriodPicker({
+  weeks,
+  rubricVersion,
+  onChange,
+  showRubric = true,
+}: {
   weeks: string;
   rubricVersion: string;
   onChange: (changes: { weeks?: string; rubricVersion?: string }) => void;
@@ -28,8 +34,13 @@ export function PeriodPicker({ weeks, rubricVersion, onChange, showRubric = true
     <View style={styles.row}>
       <ChoiceField<string> label="Period" options={SPANS} value={weeks} onChange={(w) => onChange({ weeks: w })} />
       {showRubric ? (
-        <Select label="Rubric version" value={rubricVersion} allLabel="All versions"
-          options={(rubrics.data ?? []).map((r) => ({ value: String(r.version), label: `Version ${r.version}` }))} onChange={(v) => onChange({ rubricVersion: v })} />
+        <Select
+          label="Rubric version"
+          value={rubricVersion}
+          allLabel="All versions"
+          options={(rubrics.data ?? []).map((r) => ({ value: String(r.version), label: `Version ${r.version}` }))}
+          onChange={(v) => onChange({ rubricVersion: v })}
+        />
       ) : null}
     </View>
   );

@@ -1,10 +1,12 @@
 import { Link, useRouter } from 'expo-router';
-import { periodSearch, useTechnicianTrendsQuery } from '@/components/queries/trends';
+
 import { useSessionQuery } from '@/components/queries/session';
+import { periodSearch, useTechnicianTrendsQuery } from '@/components/queries/trends';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { colors } from '@/components/ui/theme';
+
 import { PeriodPicker } from './period-picker';
 import { TechnicianTrendsView } from './technician-trends-view';
 import { usePeriodParams } from './trends-screen';
@@ -21,7 +23,10 @@ export function TechnicianTrendsPage({ technicianId }: { technicianId: number | 
     <Screen title={technicianId === null ? 'My quality' : `Trends: ${name}`} subtitle={`${period.from} to ${period.to}`}>
       <PeriodPicker weeks={weeks} rubricVersion={rubricVersion} onChange={(c) => router.setParams(c as never)} />
       {me?.role === 'manager' && technicianId !== null ? (
-        <Link href={`/jobs?technicianId=${technicianId}` as never} style={{ color: colors.accent, fontSize: 15 }}>{`Open ${name}'s jobs`}</Link>
+        <Link
+          href={`/jobs?technicianId=${technicianId}` as never}
+          style={{ color: colors.accent, fontSize: 15 }}
+        >{`Open ${name}'s jobs`}</Link>
       ) : null}
       {trends.error ? <Notice tone="error">{trends.error.message}</Notice> : null}
       {trends.data ? <TechnicianTrendsView trends={trends.data} search={search} /> : <Text variant="muted">Loading…</Text>}

@@ -1,13 +1,15 @@
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
-import type { TechnicianTrends } from '@/shared/trends';
+
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+import type { TechnicianTrends } from '@/shared/trends';
+
 import { DownloadLink } from './download-link';
+import { formatRate, intervalText } from './format';
 import { ParetoChart } from './pareto-chart';
 import { ReworkPChart } from './rework-p-chart';
 import { ScoreLineChart } from './score-line-chart';
-import { formatRate, intervalText } from './format';
 
 function Stat({ label, value, note }: { label: string; value: string; note?: string }) {
   return (
@@ -28,10 +30,18 @@ export function TechnicianTrendsView({ trends, search }: { trends: TechnicianTre
     <View style={{ gap: space.md }}>
       <View style={styles.stats}>
         <Stat label="Reviews" value={String(trends.reviews)} note={trends.tooFew ? 'Too few reviews for reliable rates' : undefined} />
-        <Stat label="First-pass yield" value={fpy.total ? formatRate(fpy.interval!.estimate) : '–'} note={fpy.total ? `${fpy.accepted} of ${fpy.total}; 95 % interval ${intervalText(fpy.interval)}` : 'No first reviews'} />
+        <Stat
+          label="First-pass yield"
+          value={fpy.total ? formatRate(fpy.interval!.estimate) : '–'}
+          note={fpy.total ? `${fpy.accepted} of ${fpy.total}; 95 % interval ${intervalText(fpy.interval)}` : 'No first reviews'}
+        />
         <Stat label="Revisions until accepted" value={trends.meanRevisionsToAcceptance?.toFixed(2) ?? '–'} note="Mean" />
         <Stat label="Recaptures" value={String(trends.recaptures)} />
-        <Stat label="Site visit to acceptance" value={trends.medianHoursVisitToAcceptance === null ? '–' : `${Math.round(trends.medianHoursVisitToAcceptance)} h`} note="Median" />
+        <Stat
+          label="Site visit to acceptance"
+          value={trends.medianHoursVisitToAcceptance === null ? '–' : `${Math.round(trends.medianHoursVisitToAcceptance)} h`}
+          note="Median"
+        />
       </View>
       <View style={[styles.charts, wide && styles.chartsWide]}>
         <View style={wide ? styles.cell : undefined}>
@@ -62,7 +72,16 @@ export function TechnicianTrendsView({ trends, search }: { trends: TechnicianTre
 
 const styles = StyleSheet.create({
   stats: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
-  stat: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.line, borderRadius: 8, padding: space.md, minWidth: 160, flexGrow: 1, gap: 2 },
+  stat: {
+    backgroundColor: colors.surface,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: 8,
+    padding: space.md,
+    minWidth: 160,
+    flexGrow: 1,
+    gap: 2,
+  },
   value: { fontFamily: fonts.bold, fontSize: 24, color: colors.ink },
   charts: { gap: space.md },
   chartsWide: { flexDirection: 'row', flexWrap: 'wrap' },

@@ -1,13 +1,21 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { View } from 'react-native';
-import { useCalibrationQuery, useReviewerTrendsQuery, useTeamTrendsQuery, useTechnicianTrendsQuery, periodSearch } from '@/components/queries/trends';
+
+import {
+  periodSearch,
+  useCalibrationQuery,
+  useReviewerTrendsQuery,
+  useTeamTrendsQuery,
+  useTechnicianTrendsQuery,
+} from '@/components/queries/trends';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { space } from '@/components/ui/theme';
+
 import { DownloadLink } from './download-link';
-import { PeriodPicker, periodFor } from './period-picker';
+import { periodFor, PeriodPicker } from './period-picker';
 import { CalibrationView, ReviewerTable } from './reviewers-and-calibration';
 import { TeamTable } from './team-table';
 import { TechnicianTrendsView } from './technician-trends-view';

@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+
 import { Text } from './text';
 import { colors, fonts } from './theme';
 
@@ -22,6 +23,13 @@ export function Badge({ label, tone = 'neutral' }: { label: string; tone?: Badge
 }
 
 const styles = StyleSheet.create({
-  badge: { borderWidth: 1.5, borderRadius: 4, paddingHorizontal: 8, paddingVertical: 2, alignSelf: 'flex-start', backgroundColor: colors.surface },
+  badge: {
+    borderWidth: 1.5,
+    borderRadius: 4,
+    paddingHorizontal: 8,
+    paddingVertical: 2,
+    alignSelf: 'flex-start',
+    backgroundColor: colors.surface,
+  },
   text: { fontFamily: fonts.semibold, fontSize: 13 },
 });

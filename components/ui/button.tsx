@@ -1,4 +1,5 @@
 import { ActivityIndicator, Pressable, StyleSheet } from 'react-native';
+
 import { Text } from './text';
 import { colors, fonts, space } from './theme';
 
@@ -25,13 +26,7 @@ export function Button({ label, onPress, tone = 'primary', busy, disabled, acces
       testID={testID}
       style={(state) => {
         const { pressed, focused } = state as { pressed: boolean; focused?: boolean };
-        return [
-        styles.base,
-        styles[tone],
-        pressed && styles.pressed,
-        inactive && styles.inactive,
-        focused && styles.focused,
-      ];
+        return [styles.base, styles[tone], pressed && styles.pressed, inactive && styles.inactive, focused && styles.focused];
       }}
     >
       {busy ? <ActivityIndicator color={tone === 'secondary' ? colors.ink : colors.surface} /> : null}

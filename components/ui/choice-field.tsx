@@ -1,4 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
+
 import { FieldError } from './field-error';
 import { Text } from './text';
 import { colors, fonts, space } from './theme';

@@ -1,18 +1,19 @@
 // A sortable table built on @tanstack/react-table (v9), rendered with react-native views so
 // it works on phone and desktop. On narrow screens it scrolls sideways.
 import {
+  type ColumnDef,
   createSortedRowModel,
   flexRender,
+  type RowData,
   rowSortingFeature,
   sortFns,
+  type SortingState,
   tableFeatures,
   useTable,
-  type ColumnDef,
-  type RowData,
-  type SortingState,
 } from '@tanstack/react-table';
 import { useMemo, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+
 import { Text } from './text';
 import { colors, fonts, space } from './theme';
 
@@ -40,7 +41,18 @@ type Props<T extends RowData> = {
 
 const SORT_WORD = { asc: 'ascending', desc: 'descending' } as const;
 
-export function DataTable<T extends RowData>({ label, columns, data, emptyText, initialSorting = [], getRowId, onRowPress, sorting: controlled, onSortingChange, selectedRowId }: Props<T>) {
+export function DataTable<T extends RowData>({
+  label,
+  columns,
+  data,
+  emptyText,
+  initialSorting = [],
+  getRowId,
+  onRowPress,
+  sorting: controlled,
+  onSortingChange,
+  selectedRowId,
+}: Props<T>) {
   const [localSorting, setLocalSorting] = useState<SortingState>(initialSorting);
   const sorting = controlled ?? localSorting;
   const setSorting = (updater: SortingState | ((old: SortingState) => SortingState)) => {
@@ -49,7 +61,10 @@ export function DataTable<T extends RowData>({ label, columns, data, emptyText, 
     else setLocalSorting(next);
   };
   const withTextCells = useMemo(
-    () => columns.map((column) => (column.cell ? column : { ...column, cell: (info: { getValue: () => unknown }) => plainCell(info.getValue()) })),
+    () =>
+      columns.map((column) =>
+        column.cell ? column : { ...column, cell: (info: { getValue: () => unknown }) => plainCell(info.getValue()) },
+      ),
     [columns],
   );
   const table = useTable({
@@ -74,8 +89,12 @@ export function DataTable<T extends RowData>({ label, columns, data, emptyText, 
               const title = flexRender(header.column.columnDef.header, header.getContext());
               const canSort = header.column.getCanSort();
               return (
-                <View role="columnheader" key={header.id} style={[styles.cell, { width: width(header.column.columnDef.meta) }]}
-                  aria-sort={sorted ? SORT_WORD[sorted] : 'none'}>
+                <View
+                  role="columnheader"
+                  key={header.id}
+                  style={[styles.cell, { width: width(header.column.columnDef.meta) }]}
+                  aria-sort={sorted ? SORT_WORD[sorted] : 'none'}
+                >
                   {canSort ? (
                     <Pressable
                       role="button"
@@ -110,8 +129,13 @@ export function DataTable<T extends RowData>({ label, columns, data, emptyText, 
             ));
             const selected = selectedRowId === row.id;
             return onRowPress ? (
-              <Pressable role="row" key={row.id} aria-selected={selected} onPress={() => onRowPress(row.original)}
-                style={(state) => [styles.row, selected && styles.selected, (state as { focused?: boolean }).focused && styles.focused]}>
+              <Pressable
+                role="row"
+                key={row.id}
+                aria-selected={selected}
+                onPress={() => onRowPress(row.original)}
+                style={(state) => [styles.row, selected && styles.selected, (state as { focused?: boolean }).focused && styles.focused]}
+              >
                 {cells}
               </Pressable>
             ) : (

@@ -1,4 +1,5 @@
 import { StyleSheet, View } from 'react-native';
+
 import { Text } from './text';
 import { colors, space } from './theme';
 

@@ -1,9 +1,20 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
+
 import { Text } from './text';
 import { space } from './theme';
 
 // The frame of every page: a heading (the page's accessible name) and scrollable content.
-export function Screen({ title, subtitle, actions, children }: { title: string; subtitle?: string; actions?: React.ReactNode; children: React.ReactNode }) {
+export function Screen({
+  title,
+  subtitle,
+  actions,
+  children,
+}: {
+  title: string;
+  subtitle?: string;
+  actions?: React.ReactNode;
+  children: React.ReactNode;
+}) {
   return (
     <ScrollView contentContainerStyle={styles.content}>
       <View style={styles.header}>

@@ -1,10 +1,17 @@
 import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
+
 import { Text } from './text';
 import { colors, space } from './theme';
 
 // A collapsible block of a long form; on a phone only the part being filled stays open.
-export function Section({ title, summary, initiallyOpen = true, children, testID }: {
+export function Section({
+  title,
+  summary,
+  initiallyOpen = true,
+  children,
+  testID,
+}: {
   title: string;
   summary?: string;
   initiallyOpen?: boolean;

@@ -1,5 +1,6 @@
 import { createElement } from 'react';
 import { View } from 'react-native';
+
 import type { SelectProps } from './select';
 import { Text } from './text';
 import { colors } from './theme';
@@ -17,7 +18,16 @@ export function Select<T extends string>({ label, value, options, onChange, allL
           'aria-label': label,
           value,
           onChange: (e: { target: { value: string } }) => onChange(e.target.value as T | ''),
-          style: { minHeight: 40, borderRadius: 6, border: `1px solid ${colors.muted}`, padding: '0 8px', fontSize: 15, fontFamily: 'PublicSans_400Regular', background: colors.surface, color: colors.ink },
+          style: {
+            minHeight: 40,
+            borderRadius: 6,
+            border: `1px solid ${colors.muted}`,
+            padding: '0 8px',
+            fontSize: 15,
+            fontFamily: 'PublicSans_400Regular',
+            background: colors.surface,
+            color: colors.ink,
+          },
         },
         createElement('option', { value: '' }, allLabel),
         ...options.map((o) => createElement('option', { key: o.value, value: o.value }, o.label)),

@@ -1,5 +1,6 @@
 import { forwardRef } from 'react';
-import { StyleSheet, TextInput, View, type TextInputProps } from 'react-native';
+import { StyleSheet, TextInput, type TextInputProps, View } from 'react-native';
+
 import { FieldError } from './field-error';
 import { Text } from './text';
 import { colors, fonts, space } from './theme';

@@ -1,4 +1,5 @@
 import { Text as RNText, type TextProps } from 'react-native';
+
 import { colors, fonts } from './theme';
 
 type Variant = 'body' | 'title' | 'heading' | 'label' | 'muted' | 'small';

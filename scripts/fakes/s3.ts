@@ -19,6 +19,8 @@ const server = new S3rver({
 });
 server.run().then(() => console.log(`fake S3 on ${endpoint.origin}, bucket ${bucket}`));
 
-const stop = () => { server.close().finally(() => process.exit(0)); };
+const stop = () => {
+  server.close().finally(() => process.exit(0));
+};
 process.on('SIGTERM', stop);
 process.on('SIGINT', stop);

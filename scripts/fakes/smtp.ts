@@ -3,6 +3,7 @@
 import fs from 'node:fs';
 import http from 'node:http';
 import path from 'node:path';
+
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
 
@@ -12,7 +13,13 @@ const store = path.join(process.env.DATA_DIR ?? '.data', 'mail', String(smtpPort
 fs.mkdirSync(store, { recursive: true });
 
 type StoredMessage = {
-  id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string;
+  id: string;
+  receivedAt: string;
+  from: string;
+  to: string[];
+  subject: string;
+  text: string;
+  html: string;
   messageId: string | null;
 };
 
@@ -65,6 +72,8 @@ http
   })
   .listen(mailboxPort, '127.0.0.1', () => console.log(`fake mailbox on 127.0.0.1:${mailboxPort}`));
 
-const stop = () => { smtp.close(() => process.exit(0)); };
+const stop = () => {
+  smtp.close(() => process.exit(0));
+};
 process.on('SIGTERM', stop);
 process.on('SIGINT', stop);

@@ -22,8 +22,20 @@ export function seededRandom(seed: number) {
   };
 }
 
-const STREETS = ['Orvell Lane', 'Tessaly Row', 'Brindmoor Road', 'Callowin Terrace', 'Smerrit Close', 'Undlecote Mews',
-  'Vantrie Drive', 'Pennowick Street', 'Yarrowlet Avenue', 'Keddlemoor Court', 'Marnish Hill', 'Oxbrindle Way'];
+const STREETS = [
+  'Orvell Lane',
+  'Tessaly Row',
+  'Brindmoor Road',
+  'Callowin Terrace',
+  'Smerrit Close',
+  'Undlecote Mews',
+  'Vantrie Drive',
+  'Pennowick Street',
+  'Yarrowlet Avenue',
+  'Keddlemoor Court',
+  'Marnish Hill',
+  'Oxbrindle Way',
+];
 const PROPERTY_TYPES: PropertyType[] = ['single_family', 'single_family', 'townhouse', 'condo_unit', 'manufactured_home'];
 const LOSS_TYPES: LossType[] = ['water', 'water', 'water', 'fire', 'smoke', 'wind', 'hail', 'other'];
 
@@ -46,8 +58,23 @@ const HOUR = 3_600_000;
 const isoDate = (d: Date) => d.toISOString().slice(0, 10);
 
 // The most recent jobs show every state of the loop; older ones are finished.
-const RECENT_STATES: JobStatus[] = ['draft', 'submitted', 'in_review', 'rework_requested', 'resubmitted', 'draft', 'submitted',
-  'accepted', 'in_review', 'draft', 'rework_requested', 'submitted', 'resubmitted', 'draft', 'in_review'];
+const RECENT_STATES: JobStatus[] = [
+  'draft',
+  'submitted',
+  'in_review',
+  'rework_requested',
+  'resubmitted',
+  'draft',
+  'submitted',
+  'accepted',
+  'in_review',
+  'draft',
+  'rework_requested',
+  'submitted',
+  'resubmitted',
+  'draft',
+  'in_review',
+];
 
 export type DemoScore = { key: string; score: number | null; maxScore: number; comment: string | null; stockReason: string | null };
 export type DemoReview = {
@@ -73,14 +100,7 @@ export type DemoJob = Omit<JobFields, 'dueAt'> & {
 };
 
 // Each technician's quality (0–1) at time t (0 = twelve weeks ago, 1 = now).
-const QUALITY: ((t: number) => number)[] = [
-  () => 0.93,
-  (t) => 0.62 + 0.36 * t,
-  (t) => 0.96 - 0.24 * t,
-  () => 0.92,
-  () => 0.9,
-  () => 0.84,
-];
+const QUALITY: ((t: number) => number)[] = [() => 0.93, (t) => 0.62 + 0.36 * t, (t) => 0.96 - 0.24 * t, () => 0.92, () => 0.9, () => 0.84];
 const REFLECTIVE_TROUBLE = 3; // Mateo keeps leaving mirrors unflagged.
 const RECAPTURE_PRONE = 4;
 
@@ -93,26 +113,68 @@ function demoRecord(rand: () => number, technicianIndex: number, variant: number
     const widthM = feetToMetres(t.widthFt);
     const expected = expectedStations(lengthM * widthM, spacing);
     const stations = Math.max(1, expected - (variant === 0 && rand() < 0.2 ? 1 : 0));
-    const hasMirror = t.name === 'Bathroom' || t.name === 'Main bedroom' || (technicianIndex === REFLECTIVE_TROUBLE && t.name === 'Living room');
+    const hasMirror =
+      t.name === 'Bathroom' || t.name === 'Main bedroom' || (technicianIndex === REFLECTIVE_TROUBLE && t.name === 'Living room');
     const unflagged = variant === 0 && (technicianIndex === REFLECTIVE_TROUBLE ? rand() < 0.7 : rand() < 0.1);
     return {
-      key: `r${i + 1}`, name: t.name, level: t.level, lengthM, widthM, areaM2: null, stations,
+      key: `r${i + 1}`,
+      name: t.name,
+      level: t.level,
+      lengthM,
+      widthM,
+      areaM2: null,
+      stations,
       doorwayStation: variant > 0 || rand() > 0.12,
       reflective: hasMirror ? [{ kind: 'mirror', found: 1, flagged: unflagged ? 0 : 1 }] : [],
     };
   });
   const exteriorStations = 4 + Math.floor(rand() * 6);
-  const levels = [...new Set(rooms.map((r) => r.level))].map((level) => ({ level, stations: rooms.filter((r) => r.level === level).reduce((s, r) => s + r.stations, 0) }));
+  const levels = [...new Set(rooms.map((r) => r.level))].map((level) => ({
+    level,
+    stations: rooms.filter((r) => r.level === level).reduce((s, r) => s + r.stations, 0),
+  }));
   levels.push({ level: 'exterior', stations: exteriorStations });
   const withGap = rand() < 0.25;
   return {
-    cameraClass, units: 'ft', levels, rooms, exteriorStations,
+    cameraClass,
+    units: 'ft',
+    levels,
+    rooms,
+    exteriorStations,
     totalStations: rooms.reduce((s, r) => s + r.stations, 0) + exteriorStations,
     glazingFlagged: rand() < 0.8 ? 'yes' : 'partly',
-    models: [{ key: 'm1', structure: 'main_dwelling', structureNote: '', splitReason: null, splitNote: '', platformReference: `TRC-${Math.floor(rand() * 90000) + 10000}` }],
+    models: [
+      {
+        key: 'm1',
+        structure: 'main_dwelling',
+        structureNote: '',
+        splitReason: null,
+        splitNote: '',
+        platformReference: `TRC-${Math.floor(rand() * 90000) + 10000}`,
+      },
+    ],
     detachedStructures: [],
-    gaps: withGap ? [{ key: 'g1', location: 'Sunroom, west windows', cause: 'direct_sun', resolved: variant > 0, note: variant > 0 ? 'Recaptured at dusk' : '' }] : [],
-    damageAreas: [{ key: 'd1', roomKey: 'r1', description: 'Ceiling stain about 3 ft across', lossType: 'water', stationNumbers: [2, 3], photoFileIds: [] }],
+    gaps: withGap
+      ? [
+          {
+            key: 'g1',
+            location: 'Sunroom, west windows',
+            cause: 'direct_sun',
+            resolved: variant > 0,
+            note: variant > 0 ? 'Recaptured at dusk' : '',
+          },
+        ]
+      : [],
+    damageAreas: [
+      {
+        key: 'd1',
+        roomKey: 'r1',
+        description: 'Ceiling stain about 3 ft across',
+        lossType: 'water',
+        stationNumbers: [2, 3],
+        photoFileIds: [],
+      },
+    ],
     panoramas: { count: rand() < 0.5 ? 2 : 0, roomKeys: ['r1'] },
     processing: { confirmed: true, confirmedAt: null },
     safety: { hazards: rand() < 0.2 ? ['standing_water'] : [], note: '' },
@@ -133,19 +195,38 @@ function scoreRecord(rand: () => number, record: CaptureRecord, quality: number,
     const score = max === 1 ? (rand() < q + 0.05 ? 1 : 0) : Math.min(4, Math.max(0, Math.round(4 * q)));
     const below = isBelowFullMarks(c, score);
     return {
-      key: c.key, score, maxScore: max,
+      key: c.key,
+      score,
+      maxScore: max,
       comment: below ? `${c.title}: falls short (demo)` : null,
-      stockReason: below ? c.stockReasons[Math.floor(rand() * c.stockReasons.length)] ?? null : null,
+      stockReason: below ? (c.stockReasons[Math.floor(rand() * c.stockReasons.length)] ?? null) : null,
     };
   });
 }
 
-function review(rand: () => number, revision: number, reviewerIndex: number, submittedAt: Date, scores: DemoScore[], forced?: Decision): DemoReview {
+function review(
+  rand: () => number,
+  revision: number,
+  reviewerIndex: number,
+  submittedAt: Date,
+  scores: DemoScore[],
+  forced?: Decision,
+): DemoReview {
   const evaluation = evaluate(DEFAULT_RUBRIC, Object.fromEntries(scores.map((s) => [s.key, s.score])));
   const claimedAt = new Date(submittedAt.getTime() + (2 + rand() * 40) * HOUR);
   const decidedAt = new Date(claimedAt.getTime() + (15 + rand() * 100) * 60_000);
   const decision = forced ?? (evaluation.passed ? 'accept' : 'rework');
-  return { revision, reviewerIndex, kind: 'primary', claimedAt, decidedAt, score: evaluation.score, passed: evaluation.passed, decision, scores };
+  return {
+    revision,
+    reviewerIndex,
+    kind: 'primary',
+    claimedAt,
+    decidedAt,
+    score: evaluation.score,
+    passed: evaluation.passed,
+    decision,
+    scores,
+  };
 }
 
 // A blind second review: the same revision scored again, mostly agreeing within one level.
@@ -158,8 +239,15 @@ function blindSecond(rand: () => number, first: DemoReview): DemoReview {
   const evaluation = evaluate(DEFAULT_RUBRIC, Object.fromEntries(scores.map((s) => [s.key, s.score])));
   const decidedAt = new Date(first.decidedAt.getTime() + (6 + rand() * 48) * HOUR);
   return {
-    revision: first.revision, reviewerIndex: (first.reviewerIndex + 1) % 3, kind: 'blind_second', claimedAt: null, decidedAt,
-    score: evaluation.score, passed: evaluation.passed, decision: evaluation.passed ? 'accept' : 'rework', scores,
+    revision: first.revision,
+    reviewerIndex: (first.reviewerIndex + 1) % 3,
+    kind: 'blind_second',
+    claimedAt: null,
+    decidedAt,
+    score: evaluation.score,
+    passed: evaluation.passed,
+    decision: evaluation.passed ? 'accept' : 'rework',
+    scores,
   };
 }
 
@@ -171,9 +259,10 @@ export function demoJobs(now = new Date()): DemoJob[] {
     const weeksAgo = Math.floor((JOB_COUNT - 1 - i) / 10);
     const t = (11 - Math.min(weeksAgo, 11)) / 11;
     const recent = i - (JOB_COUNT - RECENT_STATES.length);
-    const siteVisit = recent >= 0
-      ? new Date(now.getTime() - (recent % 6) * DAY - 12 * HOUR)
-      : new Date(now.getTime() - weeksAgo * 7 * DAY - Math.floor(rand() * 5) * DAY - 12 * HOUR);
+    const siteVisit =
+      recent >= 0
+        ? new Date(now.getTime() - (recent % 6) * DAY - 12 * HOUR)
+        : new Date(now.getTime() - weeksAgo * 7 * DAY - Math.floor(rand() * 5) * DAY - 12 * HOUR);
     const loss = new Date(siteVisit.getTime() - (1 + Math.floor(rand() * 4)) * DAY);
     const dueAt = new Date(siteVisit.getTime() + 4 * DAY);
     const quality = QUALITY[technicianIndex](t);
@@ -199,7 +288,8 @@ export function demoJobs(now = new Date()): DemoJob[] {
       revisions.push({ record: first, submittedAt: firstSubmitted });
       let r1 = review(rand, 1, reviewer, firstSubmitted, scoreRecord(rand, first, quality, technicianIndex));
       if (state === 'rework_requested' || state === 'resubmitted') {
-        if (r1.decision === 'accept') r1 = review(rand, 1, reviewer, firstSubmitted, scoreRecord(rand, first, 0.6, technicianIndex), 'rework');
+        if (r1.decision === 'accept')
+          r1 = review(rand, 1, reviewer, firstSubmitted, scoreRecord(rand, first, 0.6, technicianIndex), 'rework');
         else r1.decision = 'rework';
       } else if (state === 'accepted' && !r1.passed) {
         r1 = review(rand, 1, reviewer, firstSubmitted, scoreRecord(rand, first, 1, technicianIndex), 'accept');
@@ -218,7 +308,13 @@ export function demoJobs(now = new Date()): DemoJob[] {
         revisions.push({ record: second, submittedAt: resubmittedAt });
         if (state === 'resubmitted') status = 'resubmitted';
         else {
-          const r2 = review(rand, 2, (reviewer + 1) % 3, resubmittedAt, scoreRecord(rand, second, Math.min(1, quality + 0.2), technicianIndex));
+          const r2 = review(
+            rand,
+            2,
+            (reviewer + 1) % 3,
+            resubmittedAt,
+            scoreRecord(rand, second, Math.min(1, quality + 0.2), technicianIndex),
+          );
           if (r2.decision !== 'accept') r2.decision = 'recapture';
           reviews.push(r2);
           status = r2.decision === 'accept' ? 'accepted' : 'recapture_required';

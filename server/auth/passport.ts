@@ -1,6 +1,7 @@
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { verifyCredentials, findActiveSessionUser } from '../services/users-service';
+
+import { findActiveSessionUser, verifyCredentials } from '../services/users-service';
 
 // One message for every failure, so the answer never tells whether an e-mail is registered.
 export const SIGN_IN_FAILED = 'That e-mail and password do not match an active account.';

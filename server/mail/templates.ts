@@ -18,7 +18,13 @@ function layout(title: string, paragraphs: string[], items: string[] = [], link?
 type JobFacts = { claimReference: string; street: string; city: string; jobUrl: string };
 export type ReworkItemFacts = { title: string; instruction: string; stockReason: string | null };
 
-export function reworkRequestEmail(job: JobFacts, revision: number, items: ReworkItemFacts[], reworkDueAt: Date, reviewerName: string): Email {
+export function reworkRequestEmail(
+  job: JobFacts,
+  revision: number,
+  items: ReworkItemFacts[],
+  reworkDueAt: Date,
+  reviewerName: string,
+): Email {
   const due = reworkDueAt.toUTCString();
   const subject = `Rework requested: ${job.claimReference}, revision ${revision}`;
   const lines = items.map((item, i) => `${i + 1}. ${item.title}${item.stockReason ? ` (${item.stockReason})` : ''}: ${item.instruction}`);
@@ -32,8 +38,14 @@ export function reworkRequestEmail(job: JobFacts, revision: number, items: Rewor
   ].join('\n');
   const html = layout(
     `Rework requested for ${job.claimReference}`,
-    [`${reviewerName} reviewed revision ${revision} for ${job.street}, ${job.city} and asks for rework on ${items.length} item(s).`, `Please answer each item and resubmit by ${due}.`],
-    items.map((item) => `<strong>${escape(item.title)}</strong>${item.stockReason ? ` <em>(${escape(item.stockReason)})</em>` : ''}<br>${escape(item.instruction)}`),
+    [
+      `${reviewerName} reviewed revision ${revision} for ${job.street}, ${job.city} and asks for rework on ${items.length} item(s).`,
+      `Please answer each item and resubmit by ${due}.`,
+    ],
+    items.map(
+      (item) =>
+        `<strong>${escape(item.title)}</strong>${item.stockReason ? ` <em>(${escape(item.stockReason)})</em>` : ''}<br>${escape(item.instruction)}`,
+    ),
     { url: job.jobUrl, label: 'Open the job in Sightline' },
   );
   return { subject, text, html };
@@ -43,23 +55,51 @@ export function acceptedEmail(job: JobFacts, revision: number, score: number | n
   const subject = `Accepted: ${job.claimReference}, revision ${revision}`;
   const scoreText = score === null ? '' : ` with a score of ${score.toFixed(1)}`;
   const text = `Revision ${revision} of the capture record for claim ${job.claimReference} (${job.street}, ${job.city}) was accepted${scoreText}. Thank you.\n\nOpen the job: ${job.jobUrl}`;
-  return { subject, text, html: layout(`Accepted: ${job.claimReference}`, [`Revision ${revision} for ${job.street}, ${job.city} was accepted${scoreText}. Thank you.`], [], { url: job.jobUrl, label: 'Open the job in Sightline' }) };
+  return {
+    subject,
+    text,
+    html: layout(
+      `Accepted: ${job.claimReference}`,
+      [`Revision ${revision} for ${job.street}, ${job.city} was accepted${scoreText}. Thank you.`],
+      [],
+      { url: job.jobUrl, label: 'Open the job in Sightline' },
+    ),
+  };
 }
 
 export function recaptureEmail(job: JobFacts, revision: number, reasons: ReworkItemFacts[]): Email {
   const subject = `Recapture required: ${job.claimReference}`;
   const lines = reasons.map((r) => `- ${r.title}: ${r.instruction}`);
-  const text = [`The capture for claim ${job.claimReference} (${job.street}, ${job.city}), revision ${revision}, cannot be fixed from the office: a new site visit is needed.`, '', ...lines, '', `Open the job: ${job.jobUrl}`].join('\n');
+  const text = [
+    `The capture for claim ${job.claimReference} (${job.street}, ${job.city}), revision ${revision}, cannot be fixed from the office: a new site visit is needed.`,
+    '',
+    ...lines,
+    '',
+    `Open the job: ${job.jobUrl}`,
+  ].join('\n');
   return {
     subject,
     text,
-    html: layout(`Recapture required: ${job.claimReference}`, [`Revision ${revision} for ${job.street}, ${job.city} cannot be fixed from the office: a new site visit is needed.`],
-      reasons.map((r) => `<strong>${escape(r.title)}</strong><br>${escape(r.instruction)}`), { url: job.jobUrl, label: 'Open the job in Sightline' }),
+    html: layout(
+      `Recapture required: ${job.claimReference}`,
+      [`Revision ${revision} for ${job.street}, ${job.city} cannot be fixed from the office: a new site visit is needed.`],
+      reasons.map((r) => `<strong>${escape(r.title)}</strong><br>${escape(r.instruction)}`),
+      { url: job.jobUrl, label: 'Open the job in Sightline' },
+    ),
   };
 }
 
 export function reworkReminderEmail(job: JobFacts, reworkDueAt: Date, open: number): Email {
   const subject = `Reminder: rework overdue for ${job.claimReference}`;
   const text = `The rework for claim ${job.claimReference} (${job.street}, ${job.city}) was due ${reworkDueAt.toUTCString()} and ${open} item(s) are still open. Please answer them and resubmit.\n\nOpen the job: ${job.jobUrl}`;
-  return { subject, text, html: layout(`Rework overdue: ${job.claimReference}`, [`The rework for ${job.street}, ${job.city} was due ${reworkDueAt.toUTCString()}; ${open} item(s) are still open.`], [], { url: job.jobUrl, label: 'Open the job in Sightline' }) };
+  return {
+    subject,
+    text,
+    html: layout(
+      `Rework overdue: ${job.claimReference}`,
+      [`The rework for ${job.street}, ${job.city} was due ${reworkDueAt.toUTCString()}; ${open} item(s) are still open.`],
+      [],
+      { url: job.jobUrl, label: 'Open the job in Sightline' },
+    ),
+  };
 }

@@ -6,7 +6,15 @@ import { config } from '../config';
 export type OutgoingEmail = { id: number; to: string[]; subject: string; text: string; html: string };
 
 export function createTransport(port = config.smtp.port, host = config.smtp.host): Transporter {
-  return nodemailer.createTransport({ host, port, secure: false, ignoreTLS: true, connectionTimeout: 5000, greetingTimeout: 5000, socketTimeout: 10_000 });
+  return nodemailer.createTransport({
+    host,
+    port,
+    secure: false,
+    ignoreTLS: true,
+    connectionTimeout: 5000,
+    greetingTimeout: 5000,
+    socketTimeout: 10_000,
+  });
 }
 
 // The Message-ID is derived from the outbox row, so a message sent again is recognisably the same.

@@ -1,4 +1,5 @@
 import type { NextFunction, Request, Response } from 'express';
+
 import { HttpError } from '../errors';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);

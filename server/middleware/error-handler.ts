@@ -1,4 +1,5 @@
 import type { NextFunction, Request, Response } from 'express';
+
 import { HttpError } from '../errors';
 
 export function notFoundHandler(req: Request, _res: Response, next: NextFunction) {

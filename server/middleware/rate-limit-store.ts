@@ -2,6 +2,7 @@
 // balancer counts the same attempts (the package's default store lives in process memory).
 import type { ClientRateLimitInfo, Options, Store } from 'express-rate-limit';
 import { QueryTypes } from 'sequelize';
+
 import { sequelize } from '../db';
 
 export class MariaDbRateLimitStore implements Store {

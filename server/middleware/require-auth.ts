@@ -1,4 +1,5 @@
 import type { NextFunction, Request, Response } from 'express';
+
 import type { Role } from '../../shared/roles';
 import { HttpError } from '../errors';
 

@@ -1,5 +1,6 @@
-import { rateLimit } from 'express-rate-limit';
 import type { Request, Response } from 'express';
+import { rateLimit } from 'express-rate-limit';
+
 import { config } from '../config';
 import { MariaDbRateLimitStore } from './rate-limit-store';
 
@@ -33,6 +34,9 @@ export const signInLimitPerAccount = rateLimit({
   standardHeaders: false,
   legacyHeaders: false,
   store: new MariaDbRateLimitStore('signin-account'),
-  keyGenerator: (req) => String(req.body?.email ?? '').trim().toLowerCase() || 'blank',
+  keyGenerator: (req) =>
+    String(req.body?.email ?? '')
+      .trim()
+      .toLowerCase() || 'blank',
   handler: refuse,
 });

@@ -1,5 +1,6 @@
 import type { NextFunction, Request, Response } from 'express';
-import { validationResult, type ValidationChain } from 'express-validator';
+import { type ValidationChain, validationResult } from 'express-validator';
+
 import { invalid } from '../errors';
 
 // Runs express-validator chains and refuses the request with every failing field named,

@@ -1,4 +1,5 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { type CreationOptional, DataTypes, type InferAttributes, type InferCreationAttributes, Model, type Sequelize } from 'sequelize';
+
 import type { CaptureRecord } from '../../shared/capture-record';
 import type { StoredFile } from '../../shared/files';
 import type { CheckResult } from '../../shared/pre-submit-checks';

@@ -17,7 +17,11 @@ export function jsonColumn(name: string, allowNull = false) {
   };
 }
 
-export function numericColumn(type: typeof DataTypes.DECIMAL | ReturnType<typeof DataTypes.DECIMAL> | typeof DataTypes.BIGINT.UNSIGNED, name: string, options: { allowNull?: boolean; defaultValue?: number } = {}) {
+export function numericColumn(
+  type: typeof DataTypes.DECIMAL | ReturnType<typeof DataTypes.DECIMAL> | typeof DataTypes.BIGINT.UNSIGNED,
+  name: string,
+  options: { allowNull?: boolean; defaultValue?: number } = {},
+) {
   return {
     type,
     allowNull: options.allowNull ?? false,

@@ -1,15 +1,15 @@
 // The model registry: every model is initialised here, then associations are wired once.
 import { sequelize } from '../db';
+import { AuditEvent } from './audit-event';
 import { CaptureDraft } from './capture-draft';
 import { CaptureRevision } from './capture-revision';
 import { Job } from './job';
-import { AuditEvent } from './audit-event';
+import { OutboxMessage } from './outbox-message';
 import { Review } from './review';
 import { ReviewScore } from './review-score';
 import { ReworkItem } from './rework-item';
 import { Rubric } from './rubric';
 import { SecondReview } from './second-review';
-import { OutboxMessage } from './outbox-message';
 import { Session } from './session';
 import { StoredFile } from './stored-file';
 import { User } from './user';
@@ -40,4 +40,19 @@ Review.hasMany(ReviewScore, { as: 'scores', foreignKey: 'reviewId' });
 Review.hasMany(ReworkItem, { as: 'reworkItems', foreignKey: 'reviewId' });
 AuditEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
 
-export { sequelize, AuditEvent, OutboxMessage, CaptureDraft, CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, Session, StoredFile, User };
+export {
+  AuditEvent,
+  CaptureDraft,
+  CaptureRevision,
+  Job,
+  OutboxMessage,
+  Review,
+  ReviewScore,
+  ReworkItem,
+  Rubric,
+  SecondReview,
+  sequelize,
+  Session,
+  StoredFile,
+  User,
+};

@@ -1,6 +1,25 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import { JOB_STATUSES, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES, type JobStatus, type LossType, type Priority, type PropertyType } from '../../shared/jobs';
+import {
+  type CreationOptional,
+  DataTypes,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  Model,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
+
 import { CAMERA_CLASSES, type CameraClass } from '../../shared/capture-record';
+import {
+  JOB_STATUSES,
+  type JobStatus,
+  LOSS_TYPES,
+  type LossType,
+  PRIORITIES,
+  type Priority,
+  PROPERTY_TYPES,
+  type PropertyType,
+} from '../../shared/jobs';
 import { numericColumn } from './columns';
 import type { User } from './user';
 

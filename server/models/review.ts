@@ -1,5 +1,6 @@
 // One decided review of one revision: a first review or a blind second one.
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { type CreationOptional, DataTypes, type InferAttributes, type InferCreationAttributes, Model, type Sequelize } from 'sequelize';
+
 import type { Decision } from '../../shared/review';
 import { numericColumn } from './columns';
 

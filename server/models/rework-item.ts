@@ -1,5 +1,6 @@
 // A failing criterion sent back to the technician, with their answer and any dispute's outcome.
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { type CreationOptional, DataTypes, type InferAttributes, type InferCreationAttributes, Model, type Sequelize } from 'sequelize';
+
 import { jsonColumn } from './columns';
 
 export class ReworkItem extends Model<InferAttributes<ReworkItem>, InferCreationAttributes<ReworkItem>> {

@@ -1,5 +1,6 @@
 // A versioned rubric; a saved version never changes, reviews keep the one they were scored under.
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { type CreationOptional, DataTypes, type InferAttributes, type InferCreationAttributes, Model, type Sequelize } from 'sequelize';
+
 import type { Criterion } from '../../shared/rubric';
 import { jsonColumn, numericColumn } from './columns';
 

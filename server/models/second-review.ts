@@ -1,5 +1,5 @@
 // A revision drawn for a blind second review, and who holds its claim.
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { type CreationOptional, DataTypes, type InferAttributes, type InferCreationAttributes, Model, type Sequelize } from 'sequelize';
 
 export class SecondReview extends Model<InferAttributes<SecondReview>, InferCreationAttributes<SecondReview>> {
   declare id: CreationOptional<number>;

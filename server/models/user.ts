@@ -1,6 +1,7 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
-import { ROLES, type Role } from '../../shared/roles';
+import { type CreationOptional, DataTypes, type InferAttributes, type InferCreationAttributes, Model, type Sequelize } from 'sequelize';
+
 import type { SessionUser, UserRow } from '../../shared/api-types';
+import { type Role, ROLES } from '../../shared/roles';
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
   declare id: CreationOptional<number>;

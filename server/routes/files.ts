@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { param } from 'express-validator';
+
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { openFile } from '../services/files-service';

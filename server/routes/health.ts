@@ -1,4 +1,5 @@
 import { Router } from 'express';
+
 import { sequelize } from '../db';
 
 export const healthRouter = Router();

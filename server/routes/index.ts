@@ -1,12 +1,13 @@
 import type { Router } from 'express';
+
 import { filesRouter } from './files';
 import { healthRouter } from './health';
 import { jobsRouter } from './jobs';
 import { mailboxRouter } from './mailbox';
 import { meRouter } from './me';
-import { reworkRouter } from './rework';
 import { queueRouter } from './queue';
 import { reviewsRouter } from './reviews';
+import { reworkRouter } from './rework';
 import { rubricsRouter } from './rubrics';
 import { sessionRouter } from './session';
 import { techniciansRouter } from './technicians';

@@ -1,6 +1,7 @@
 import { Router } from 'express';
-import multer from 'multer';
 import { body, param, query } from 'express-validator';
+import multer from 'multer';
+
 import type { CaptureRecord } from '../../shared/capture-record';
 import { FILE_KINDS, type FileKind } from '../../shared/files';
 import { JOB_STATUSES, type JobStatus } from '../../shared/jobs';
@@ -8,12 +9,12 @@ import { config } from '../config';
 import { HttpError } from '../errors';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
-import { captureRecordRules } from '../validators/capture-record';
-import { jobCreateRules, jobUpdateRules } from '../validators/job';
 import { getRevision, saveDraft, submitRecord } from '../services/capture-record-service';
 import { detachFile, uploadFile } from '../services/files-service';
-import { stationAnalysisFor } from '../services/station-service';
 import { createJob, getJobDetail, listJobs, updateJob } from '../services/jobs-service';
+import { stationAnalysisFor } from '../services/station-service';
+import { captureRecordRules } from '../validators/capture-record';
+import { jobCreateRules, jobUpdateRules } from '../validators/job';
 
 export const jobsRouter = Router();
 
@@ -26,7 +27,9 @@ jobsRouter.get(
   '/',
   anyJobReader,
   validate(
-    query('status', `Choose from: ${JOB_STATUSES.join(', ')}`).optional().isString()
+    query('status', `Choose from: ${JOB_STATUSES.join(', ')}`)
+      .optional()
+      .isString()
       .custom((v: string) => v.split(',').every((s) => (JOB_STATUSES as readonly string[]).includes(s))),
     query('technicianId', 'Must be a user id').optional().isInt({ min: 1 }).toInt(),
   ),
@@ -69,10 +72,16 @@ jobsRouter.get(
 
 // Uploads are held in memory only long enough to check and hash them, then go to S3.
 const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.uploadMaxBytes, files: 1 } });
-const singleFile = (req: Parameters<ReturnType<typeof upload.single>>[0], res: Parameters<ReturnType<typeof upload.single>>[1], next: (err?: unknown) => void) =>
+const singleFile = (
+  req: Parameters<ReturnType<typeof upload.single>>[0],
+  res: Parameters<ReturnType<typeof upload.single>>[1],
+  next: (err?: unknown) => void,
+) =>
   upload.single('file')(req, res, (err: unknown) => {
     if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
-      return next(new HttpError(413, 'too_large', `Files may be at most ${config.uploadMaxBytes / 1024 / 1024} MB.`, { file: 'Too large' }));
+      return next(
+        new HttpError(413, 'too_large', `Files may be at most ${config.uploadMaxBytes / 1024 / 1024} MB.`, { file: 'Too large' }),
+      );
     }
     next(err);
   });

@@ -1,4 +1,5 @@
-import { Router, type NextFunction, type Request, type Response } from 'express';
+import { type NextFunction, type Request, type Response, Router } from 'express';
+
 import { config } from '../config';
 import { HttpError } from '../errors';
 import { requireAuth, requireRole } from '../middleware/require-auth';

@@ -1,4 +1,5 @@
 import { Router } from 'express';
+
 import { requireAuth } from '../middleware/require-auth';
 
 export const meRouter = Router();

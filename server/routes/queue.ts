@@ -1,4 +1,5 @@
 import { Router } from 'express';
+
 import type { JobStatus } from '../../shared/jobs';
 import type { QueueSort } from '../../shared/review';
 import { requireRole } from '../middleware/require-auth';

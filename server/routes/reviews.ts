@@ -1,11 +1,12 @@
 import { Router } from 'express';
 import { param, query } from 'express-validator';
+
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { claimJob, reassignClaims, releaseClaim } from '../services/claims-service';
 import { claimSecondReview, getWorkspace, listOpenSecondReviews, submitReview, submitSecondReview } from '../services/review-service';
-import { reassignRules, reviewRules } from '../validators/review';
 import { listActiveReviewers } from '../services/users-service';
+import { reassignRules, reviewRules } from '../validators/review';
 
 // Mounted at /api: claims, the scoring workspace, decisions and blind second reviews.
 export const reviewsRouter = Router();
@@ -57,7 +58,9 @@ reviewsRouter.post(
   requireRole('reviewer'),
   validate(param('id', 'Must be a second-review id').isInt({ min: 1 }).toInt(), ...reviewRules),
   async (req, res) => {
-    res.status(201).json(await submitSecondReview(req.user!, Number(req.params.id), { decision: req.body.decision, scores: req.body.scores }));
+    res
+      .status(201)
+      .json(await submitSecondReview(req.user!, Number(req.params.id), { decision: req.body.decision, scores: req.body.scores }));
   },
 );
 

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { body, param } from 'express-validator';
+
 import { REWORK_RESPONSES } from '../../shared/review';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
@@ -27,7 +28,13 @@ reworkRouter.put(
     body('fileIds.*', 'File ids are whole numbers').isInt({ min: 1 }).toInt(),
   ),
   async (req, res) => {
-    res.json({ item: await answerReworkItem(req.user!, Number(req.params.id), { response: req.body.response, note: req.body.note, fileIds: req.body.fileIds }) });
+    res.json({
+      item: await answerReworkItem(req.user!, Number(req.params.id), {
+        response: req.body.response,
+        note: req.body.note,
+        fileIds: req.body.fileIds,
+      }),
+    });
   },
 );
 

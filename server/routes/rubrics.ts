@@ -1,4 +1,5 @@
 import { Router } from 'express';
+
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { createRubricVersion, currentRubric, listRubrics, toRubricView } from '../services/rubric-service';

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { body } from 'express-validator';
+
 import { passport, SIGN_IN_FAILED } from '../auth/passport';
 import { HttpError } from '../errors';
 import { requireAuth } from '../middleware/require-auth';

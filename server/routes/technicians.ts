@@ -1,4 +1,5 @@
 import { Router } from 'express';
+
 import { requireRole } from '../middleware/require-auth';
 import { listTechnicians } from '../services/jobs-service';
 

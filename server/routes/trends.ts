@@ -1,6 +1,7 @@
-import { Router, type Request, type Response } from 'express';
+import { type Request, type Response, Router } from 'express';
 import { query } from 'express-validator';
 import Papa from 'papaparse';
+
 import type { TrendsQuery } from '../../shared/trends';
 import { forbidden } from '../errors';
 import { requireRole } from '../middleware/require-auth';
@@ -12,7 +13,10 @@ export const trendsRouter = Router();
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 const periodRules = [
   query('from', 'A date as YYYY-MM-DD').optional().matches(ISO_DATE).isISO8601({ strict: true }),
-  query('to', 'A date as YYYY-MM-DD, not before from').optional().matches(ISO_DATE).isISO8601({ strict: true })
+  query('to', 'A date as YYYY-MM-DD, not before from')
+    .optional()
+    .matches(ISO_DATE)
+    .isISO8601({ strict: true })
     .custom((to: string, { req }) => typeof req.query?.from !== 'string' || to >= req.query.from),
   query('rubricVersion', 'A rubric version number').optional().isInt({ min: 1 }).toInt(),
   query('technicianId', 'Must be a user id').optional().isInt({ min: 1 }).toInt(),
@@ -52,36 +56,64 @@ trendsRouter.get('/', requireRole('technician', 'manager'), validate(...periodRu
     f.technicianId = req.user!.id;
   }
   const trends = await technicianTrends(f);
-  send(req, res, 'weekly', trends, () => trends.weekly.map((w) => {
-    const chart = trends.reworkChart.rows.find((r) => r.label === w.week);
-    return {
-      week_starting: w.week, reviews: w.reviews, mean_score: w.meanScore?.toFixed(1) ?? '', rework: w.rework,
-      rework_rate_pct: pct(chart?.p), lower_limit_pct: pct(chart?.lcl), upper_limit_pct: pct(chart?.ucl), outside_limits: chart?.outside ?? '',
-    };
-  }));
+  send(req, res, 'weekly', trends, () =>
+    trends.weekly.map((w) => {
+      const chart = trends.reworkChart.rows.find((r) => r.label === w.week);
+      return {
+        week_starting: w.week,
+        reviews: w.reviews,
+        mean_score: w.meanScore?.toFixed(1) ?? '',
+        rework: w.rework,
+        rework_rate_pct: pct(chart?.p),
+        lower_limit_pct: pct(chart?.lcl),
+        upper_limit_pct: pct(chart?.ucl),
+        outside_limits: chart?.outside ?? '',
+      };
+    }),
+  );
 });
 
 trendsRouter.get('/team', requireRole('manager'), validate(...periodRules), async (req, res) => {
   const rows = await teamTable(filters(req));
-  send(req, res, 'team', { rows }, () => rows.map((r) => ({
-    technician: r.technician.name, reviews: r.reviews, mean_score: r.meanScore?.toFixed(1) ?? '',
-    first_pass_yield_pct: pct(r.firstPassYield.interval?.estimate), fpy_low_pct: pct(r.firstPassYield.interval?.low), fpy_high_pct: pct(r.firstPassYield.interval?.high),
-    first_reviews: r.firstPassYield.total, rework_rate_pct: pct(r.reworkRate), recaptures: r.recaptures,
-    mean_revisions_to_acceptance: r.meanRevisionsToAcceptance?.toFixed(2) ?? '', median_hours_visit_to_acceptance: r.medianHoursVisitToAcceptance ?? '',
-    too_few_reviews: r.tooFew ? 'yes' : 'no',
-  })));
+  send(req, res, 'team', { rows }, () =>
+    rows.map((r) => ({
+      technician: r.technician.name,
+      reviews: r.reviews,
+      mean_score: r.meanScore?.toFixed(1) ?? '',
+      first_pass_yield_pct: pct(r.firstPassYield.interval?.estimate),
+      fpy_low_pct: pct(r.firstPassYield.interval?.low),
+      fpy_high_pct: pct(r.firstPassYield.interval?.high),
+      first_reviews: r.firstPassYield.total,
+      rework_rate_pct: pct(r.reworkRate),
+      recaptures: r.recaptures,
+      mean_revisions_to_acceptance: r.meanRevisionsToAcceptance?.toFixed(2) ?? '',
+      median_hours_visit_to_acceptance: r.medianHoursVisitToAcceptance ?? '',
+      too_few_reviews: r.tooFew ? 'yes' : 'no',
+    })),
+  );
 });
 
 trendsRouter.get('/reviewers', requireRole('manager'), validate(...periodRules), async (req, res) => {
   const rows = await reviewerTable(filters(req));
-  send(req, res, 'reviewers', { rows }, () => rows.map((r) => ({
-    reviewer: r.reviewer.name, reviews: r.reviews, median_minutes_claim_to_decision: r.medianMinutesClaimToDecision ?? '', decided_after_due_pct: pct(r.lateShare),
-  })));
+  send(req, res, 'reviewers', { rows }, () =>
+    rows.map((r) => ({
+      reviewer: r.reviewer.name,
+      reviews: r.reviews,
+      median_minutes_claim_to_decision: r.medianMinutesClaimToDecision ?? '',
+      decided_after_due_pct: pct(r.lateShare),
+    })),
+  );
 });
 
 trendsRouter.get('/calibration', requireRole('manager'), validate(...periodRules), async (req, res) => {
   const result = await calibration(filters(req));
-  send(req, res, 'calibration', result, () => result.reviewerPairs.map((p) => ({
-    reviewer_a: p.reviewers[0], reviewer_b: p.reviewers[1], blind_pairs: p.n, decision_kappa: p.decisionKappa?.toFixed(3) ?? '', agreement: p.band ?? '',
-  })));
+  send(req, res, 'calibration', result, () =>
+    result.reviewerPairs.map((p) => ({
+      reviewer_a: p.reviewers[0],
+      reviewer_b: p.reviewers[1],
+      blind_pairs: p.n,
+      decision_kappa: p.decisionKappa?.toFixed(3) ?? '',
+      agreement: p.band ?? '',
+    })),
+  );
 });

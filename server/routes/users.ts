@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { body, param } from 'express-validator';
+
 import { ROLES } from '../../shared/roles';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
@@ -30,9 +31,12 @@ usersRouter.patch(
   '/:id',
   validate(
     param('id', 'Must be a user id').isInt({ min: 1 }).toInt(),
-    body('role', `Choose one of: ${ROLES.join(', ')}`).optional().isIn(ROLES),
+    body('role', `Choose one of: ${ROLES.join(', ')}`)
+      .optional()
+      .isIn(ROLES),
     body('active', 'Must be true or false').optional().isBoolean({ strict: true }),
-    body().custom((value) => value && (value.role !== undefined || value.active !== undefined))
+    body()
+      .custom((value) => value && (value.role !== undefined || value.active !== undefined))
       .withMessage('Send a role or an active flag'),
   ),
   async (req, res) => {

@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+
 import { AuditEvent } from '../models';
 
 // Appends to a job's timeline inside the caller's transaction, so the event exists exactly

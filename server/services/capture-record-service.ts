@@ -1,25 +1,28 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
+
 import type { RevisionView } from '../../shared/api-types';
 import type { CaptureRecord } from '../../shared/capture-record';
+import { resumeDueClock } from '../../shared/due-clock';
 import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
 import { checkCaptureRecord } from '../../shared/pre-submit-checks';
 import { conflict, invalid, notFound } from '../errors';
 import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models';
 import { recordEvent } from './audit-service';
-import { resumeDueClock } from '../../shared/due-clock';
+import { assertAssignedTechnician, findJobFor } from './job-access';
 import { assertReworkAnswered } from './rework-service';
 import { analyseAttachedFile } from './station-service';
-import { assertAssignedTechnician, findJobFor } from './job-access';
 
 type Actor = Express.User;
 
 function assertEditable(status: (typeof EDITABLE_STATUSES)[number] | string) {
   if (!(EDITABLE_STATUSES as string[]).includes(status)) {
-    throw conflict(`The capture record cannot be changed while the job is "${JOB_STATUS_LABELS[status as keyof typeof JOB_STATUS_LABELS]}".`);
+    throw conflict(
+      `The capture record cannot be changed while the job is "${JOB_STATUS_LABELS[status as keyof typeof JOB_STATUS_LABELS]}".`,
+    );
   }
 }
 
-async function assertPhotosBelongToJob(jobId: number, record: CaptureRecord, transaction?: import('sequelize').Transaction) {
+async function assertPhotosBelongToJob(jobId: number, record: CaptureRecord, transaction?: Transaction) {
   const ids = [...new Set(record.damageAreas.flatMap((a) => a.photoFileIds))];
   if (ids.length === 0) return;
   const found = await StoredFile.count({ where: { jobId, id: { [Op.in]: ids }, kind: 'photo', detachedAt: null }, transaction });

@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 
 import { claimExpiresAt } from '../../shared/review-rules';
 import { config } from '../config';
@@ -51,7 +51,7 @@ export async function releaseClaim(actor: Actor, jobId: number) {
   });
 }
 
-async function releaseRow(job: Job, transaction: import('sequelize').Transaction) {
+async function releaseRow(job: Job, transaction: Transaction) {
   job.claimedById = null;
   job.claimedAt = null;
   job.claimExpiresAt = null;
@@ -72,7 +72,10 @@ export async function reassignClaims(actor: Actor, input: { toReviewerId: number
     for (const job of jobs) {
       if (!CLAIMABLE.includes(job.status)) continue;
       const from = job.claimedById;
-      await job.update({ claimedById: target.id, claimedAt: now, claimExpiresAt: claimExpiresAt(now, config.review.claimMinutes), status: 'in_review' }, { transaction });
+      await job.update(
+        { claimedById: target.id, claimedAt: now, claimExpiresAt: claimExpiresAt(now, config.review.claimMinutes), status: 'in_review' },
+        { transaction },
+      );
       await recordEvent(transaction, job.id, actor.id, 'claim_reassigned', { from, to: target.id });
     }
     return { moved: jobs.filter((j) => j.claimedById === target.id).length };

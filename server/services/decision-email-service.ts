@@ -4,7 +4,7 @@ import type { Transaction } from 'sequelize';
 import { reworkDueAt } from '../../shared/due-clock';
 import type { Decision } from '../../shared/review';
 import { config } from '../config';
-import { acceptedEmail, recaptureEmail, reworkRequestEmail, type ReworkItemFacts } from '../mail/templates';
+import { acceptedEmail, recaptureEmail, type ReworkItemFacts, reworkRequestEmail } from '../mail/templates';
 import { type Job, User } from '../models';
 import { enqueueEmail } from './outbox-service';
 
@@ -23,13 +23,29 @@ export async function queueDecisionEmail(
   if (!technician) return;
   const facts = jobFacts(job);
   if (decision === 'rework') {
-    const email = reworkRequestEmail(facts, context.revision, context.items, reworkDueAt(context.decidedAt, config.reworkHours), context.reviewerName);
+    const email = reworkRequestEmail(
+      facts,
+      context.revision,
+      context.items,
+      reworkDueAt(context.decidedAt, config.reworkHours),
+      context.reviewerName,
+    );
     await enqueueEmail(transaction, { ...email, jobId: job.id, kind: 'rework_request', to: [technician.email] });
   } else if (decision === 'accept') {
-    await enqueueEmail(transaction, { ...acceptedEmail(facts, context.revision, context.score), jobId: job.id, kind: 'accepted', to: [technician.email] });
+    await enqueueEmail(transaction, {
+      ...acceptedEmail(facts, context.revision, context.score),
+      jobId: job.id,
+      kind: 'accepted',
+      to: [technician.email],
+    });
   } else {
     const managers = await User.findAll({ where: { role: 'manager', active: true }, transaction });
     const to = [technician.email, ...managers.map((m) => m.email)];
-    await enqueueEmail(transaction, { ...recaptureEmail(facts, context.revision, context.items), jobId: job.id, kind: 'recapture_required', to });
+    await enqueueEmail(transaction, {
+      ...recaptureEmail(facts, context.revision, context.items),
+      jobId: job.id,
+      kind: 'recapture_required',
+      to,
+    });
   }
 }

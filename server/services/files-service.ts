@@ -1,5 +1,7 @@
 import crypto from 'node:crypto';
+
 import { fromBuffer } from 'file-type';
+
 import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, type FileKind } from '../../shared/files';
 import { HttpError, invalid, notFound } from '../errors';
 import { StoredFile } from '../models';
@@ -28,7 +30,9 @@ export async function uploadFile(actor: Actor, jobId: number, kind: FileKind, up
   assertAssignedTechnician(actor, job);
   const contentType = await sniffContentType(upload.buffer);
   if (!contentType || !ACCEPTED_TYPES[kind].includes(contentType)) {
-    throw invalid({ file: `A ${FILE_KIND_LABELS[kind].toLowerCase()} must be ${ACCEPTED_DESCRIPTION[kind]}; this file's content is ${contentType ?? 'not a recognised type'}.` });
+    throw invalid({
+      file: `A ${FILE_KIND_LABELS[kind].toLowerCase()} must be ${ACCEPTED_DESCRIPTION[kind]}; this file's content is ${contentType ?? 'not a recognised type'}.`,
+    });
   }
   if (kind === 'station_coordinates') assertValidStationFile(upload.buffer);
   const sha256 = crypto.createHash('sha256').update(upload.buffer).digest('hex');

@@ -1,3 +1,5 @@
+import type { Transaction } from 'sequelize';
+
 import { forbidden, notFound } from '../errors';
 import { Job } from '../models';
 
@@ -5,7 +7,7 @@ type Actor = Express.User;
 
 // A technician reaches only their own jobs; another technician's job answers 404, so its
 // existence is not revealed.
-export async function findJobFor(actor: Actor, jobId: number, options: { forUpdate?: boolean; transaction?: import('sequelize').Transaction } = {}) {
+export async function findJobFor(actor: Actor, jobId: number, options: { forUpdate?: boolean; transaction?: Transaction } = {}) {
   const job = await Job.findByPk(jobId, {
     transaction: options.transaction,
     lock: options.forUpdate && options.transaction ? options.transaction.LOCK.UPDATE : undefined,

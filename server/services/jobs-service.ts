@@ -1,15 +1,15 @@
-import { fn, col, Op, type WhereOptions } from 'sequelize';
+import { col, fn, Op, type WhereOptions } from 'sequelize';
+
 import type { JobDetail } from '../../shared/api-types';
-import type { JobInput, JobStatus, JobSummary } from '../../shared/jobs';
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import { effectiveDueAt } from '../../shared/due-clock';
+import type { JobInput, JobStatus, JobSummary } from '../../shared/jobs';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, sequelize, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
 
 type Actor = Express.User;
-
 
 function toSummary(job: Job, revisionCount: number): JobSummary {
   return {
@@ -71,7 +71,21 @@ export async function createJob(actor: Actor, input: JobInput): Promise<JobSumma
   }
   const job = await sequelize.transaction(async (transaction) => {
     const dueAt = new Date(input.dueAt);
-    const created = await Job.create({ ...input, dueAt, effectiveDueAt: dueAt, createdById: actor.id, cameraClass: null, submittedAt: null, pausedAt: null, claimedById: null, claimedAt: null, claimExpiresAt: null }, { transaction });
+    const created = await Job.create(
+      {
+        ...input,
+        dueAt,
+        effectiveDueAt: dueAt,
+        createdById: actor.id,
+        cameraClass: null,
+        submittedAt: null,
+        pausedAt: null,
+        claimedById: null,
+        claimedAt: null,
+        claimExpiresAt: null,
+      },
+      { transaction },
+    );
     await recordEvent(transaction, created.id, actor.id, 'created', { claimReference: created.claimReference });
     await recordEvent(transaction, created.id, actor.id, 'assigned', { technicianId: input.technicianId });
     await CaptureDraft.create({ jobId: created.id, data: emptyCaptureRecord() }, { transaction });
@@ -80,7 +94,11 @@ export async function createJob(actor: Actor, input: JobInput): Promise<JobSumma
   return getJobSummary(actor, job.id);
 }
 
-export async function updateJob(actor: Actor, jobId: number, changes: Partial<Pick<JobInput, 'technicianId' | 'dueAt' | 'priority' | 'siteVisitDate'>>) {
+export async function updateJob(
+  actor: Actor,
+  jobId: number,
+  changes: Partial<Pick<JobInput, 'technicianId' | 'dueAt' | 'priority' | 'siteVisitDate'>>,
+) {
   if (changes.technicianId !== undefined) await assertActiveTechnician(changes.technicianId);
   await sequelize.transaction(async (transaction) => {
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
@@ -123,6 +141,10 @@ export async function getJobDetail(actor: Actor, jobId: number): Promise<JobDeta
 }
 
 export async function listTechnicians() {
-  const technicians = await User.findAll({ where: { role: 'technician', active: true }, attributes: ['id', 'name'], order: [['name', 'ASC']] });
+  const technicians = await User.findAll({
+    where: { role: 'technician', active: true },
+    attributes: ['id', 'name'],
+    order: [['name', 'ASC']],
+  });
   return technicians.map((t) => ({ id: t.id, name: t.name }));
 }

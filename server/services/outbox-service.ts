@@ -15,13 +15,23 @@ export async function enqueueEmail(
 ) {
   const row = await OutboxMessage.create(
     {
-      jobId: message.jobId, kind: message.kind, dedupeKey: message.dedupeKey ?? null, recipients: message.to,
-      subject: message.subject, textBody: message.text, htmlBody: message.html,
-      nextAttemptAt: new Date(), lastError: null, lockedBy: null, lockedUntil: null, sentAt: null,
+      jobId: message.jobId,
+      kind: message.kind,
+      dedupeKey: message.dedupeKey ?? null,
+      recipients: message.to,
+      subject: message.subject,
+      textBody: message.text,
+      htmlBody: message.html,
+      nextAttemptAt: new Date(),
+      lastError: null,
+      lockedBy: null,
+      lockedUntil: null,
+      sentAt: null,
     },
     { transaction },
   );
-  if (message.jobId) await recordEvent(transaction, message.jobId, null, 'email_queued', { outboxId: row.id, kind: message.kind, to: message.to });
+  if (message.jobId)
+    await recordEvent(transaction, message.jobId, null, 'email_queued', { outboxId: row.id, kind: message.kind, to: message.to });
   return row;
 }
 
@@ -45,13 +55,25 @@ export async function sendPendingEmails(transport: Transporter, instanceId = con
       limit: 20,
     },
   );
-  const leased = await OutboxMessage.findAll({ where: { lockedBy: instanceId, lockedUntil: leaseUntil, status: 'pending' }, order: [['id', 'ASC']] });
+  const leased = await OutboxMessage.findAll({
+    where: { lockedBy: instanceId, lockedUntil: leaseUntil, status: 'pending' },
+    order: [['id', 'ASC']],
+  });
   let sent = 0;
   for (const message of leased) {
     try {
-      await deliver(transport, { id: message.id, to: message.recipients, subject: message.subject, text: message.textBody, html: message.htmlBody });
+      await deliver(transport, {
+        id: message.id,
+        to: message.recipients,
+        subject: message.subject,
+        text: message.textBody,
+        html: message.htmlBody,
+      });
       await sequelize.transaction(async (transaction) => {
-        await message.update({ status: 'sent', sentAt: new Date(), attempts: message.attempts + 1, lastError: null, lockedBy: null, lockedUntil: null }, { transaction });
+        await message.update(
+          { status: 'sent', sentAt: new Date(), attempts: message.attempts + 1, lastError: null, lockedBy: null, lockedUntil: null },
+          { transaction },
+        );
         if (message.jobId) await recordEvent(transaction, message.jobId, null, 'email_sent', { outboxId: message.id, kind: message.kind });
       });
       sent += 1;
@@ -59,10 +81,22 @@ export async function sendPendingEmails(transport: Transporter, instanceId = con
       const attempts = message.attempts + 1;
       await sequelize.transaction(async (transaction) => {
         await message.update(
-          { attempts, lastError: (error as Error).message.slice(0, 2000), nextAttemptAt: new Date(Date.now() + backoffSeconds(attempts) * 1000), lockedBy: null, lockedUntil: null },
+          {
+            attempts,
+            lastError: (error as Error).message.slice(0, 2000),
+            nextAttemptAt: new Date(Date.now() + backoffSeconds(attempts) * 1000),
+            lockedBy: null,
+            lockedUntil: null,
+          },
           { transaction },
         );
-        if (message.jobId) await recordEvent(transaction, message.jobId, null, 'email_failed', { outboxId: message.id, kind: message.kind, attempt: attempts, error: (error as Error).message.slice(0, 200) });
+        if (message.jobId)
+          await recordEvent(transaction, message.jobId, null, 'email_failed', {
+            outboxId: message.id,
+            kind: message.kind,
+            attempt: attempts,
+            error: (error as Error).message.slice(0, 200),
+          });
       });
     }
   }

@@ -1,6 +1,7 @@
 import { literal, Op, type Order, type WhereOptions } from 'sequelize';
-import type { QueueFilters, QueuePage, QueueRow, QueueSort } from '../../shared/review';
+
 import type { JobStatus } from '../../shared/jobs';
+import type { QueueFilters, QueuePage, QueueRow, QueueSort } from '../../shared/review';
 import { Job, User } from '../models';
 
 type Actor = Express.User;
@@ -37,17 +38,29 @@ function orderFor(sort: QueueSort | undefined, dir: 'asc' | 'desc'): Order {
   const direction = dir.toUpperCase();
   switch (sort) {
     case 'submitted':
-      return [['submittedAt', direction], ['id', 'ASC']];
+      return [
+        ['submittedAt', direction],
+        ['id', 'ASC'],
+      ];
     case 'claim':
       return [['claimReference', direction]];
     case 'technician':
-      return [[{ model: User, as: 'technician' }, 'name', direction], ['effectiveDueAt', 'ASC']];
+      return [
+        [{ model: User, as: 'technician' }, 'name', direction],
+        ['effectiveDueAt', 'ASC'],
+      ];
     case 'priority':
       return [priorityRank(direction === 'ASC' ? 'ASC' : 'DESC'), ['effectiveDueAt', 'ASC']];
     case 'revision':
-      return [['currentRevision', direction], ['effectiveDueAt', 'ASC']];
+      return [
+        ['currentRevision', direction],
+        ['effectiveDueAt', 'ASC'],
+      ];
     case 'due':
-      return [['effectiveDueAt', direction], ['id', 'ASC']];
+      return [
+        ['effectiveDueAt', direction],
+        ['id', 'ASC'],
+      ];
     default:
       // Overdue first, then by due time, then the most urgent priority.
       return [OVERDUE_FIRST, ['effectiveDueAt', 'ASC'], priorityRank('ASC'), ['id', 'ASC']];

@@ -18,7 +18,11 @@ export async function queueOverdueReworkReminders(now = new Date()) {
     where: {
       status: 'rework_requested',
       pausedAt: { [Op.lte]: cutoff },
-      [Op.and]: [literal("NOT EXISTS (SELECT 1 FROM outbox o WHERE o.job_id = `Job`.`id` AND o.kind = 'rework_reminder' AND o.created_at >= `Job`.`paused_at`)")],
+      [Op.and]: [
+        literal(
+          "NOT EXISTS (SELECT 1 FROM outbox o WHERE o.job_id = `Job`.`id` AND o.kind = 'rework_reminder' AND o.created_at >= `Job`.`paused_at`)",
+        ),
+      ],
     },
     limit: 100,
   });
@@ -32,7 +36,10 @@ export async function queueOverdueReworkReminders(now = new Date()) {
       await sequelize.transaction(async (transaction) => {
         await enqueueEmail(transaction, {
           ...reworkReminderEmail(jobFacts(job), reworkDueAt(job.pausedAt!, config.reworkHours), open),
-          jobId: job.id, kind: 'rework_reminder', to: [technician.email], dedupeKey: `rework-reminder:${job.id}:${job.pausedAt!.getTime()}`,
+          jobId: job.id,
+          kind: 'rework_reminder',
+          to: [technician.email],
+          dedupeKey: `rework-reminder:${job.id}:${job.pausedAt!.getTime()}`,
         });
       });
       queued += 1;

@@ -1,21 +1,20 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
+
 import type { OpenSecondReview } from '../../shared/api-types';
-import type { CaptureRecord } from '../../shared/capture-record';
+import { pauseDueClock } from '../../shared/due-clock';
 import type { Decision, ScoreInput, Workspace } from '../../shared/review';
-import { type Criterion, scaleMax } from '../../shared/rubric';
-import { isBelowFullMarks } from '../../shared/scoring';
 import { applicability, claimExpiresAt, decisionProblem, validateScores } from '../../shared/review-rules';
-import { evaluate } from '../../shared/scoring';
+import { carriesOver, diffRevisions } from '../../shared/revision-diff';
+import { type Criterion, scaleMax } from '../../shared/rubric';
+import { evaluate, isBelowFullMarks } from '../../shared/scoring';
 import { config } from '../config';
 import { conflict, forbidden, invalid, notFound } from '../errors';
 import { CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, sequelize, User } from '../models';
 import { recordEvent } from './audit-service';
 import { assertHoldsClaim } from './claims-service';
-import { pauseDueClock } from '../../shared/due-clock';
-import { toReworkItemView } from './rework-service';
 import { queueDecisionEmail } from './decision-email-service';
-import { carriesOver, diffRevisions } from '../../shared/revision-diff';
 import { toQueueRow } from './queue-service';
+import { toReworkItemView } from './rework-service';
 import { currentRubric, toRubricView } from './rubric-service';
 
 type Actor = Express.User;
@@ -53,7 +52,14 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
   }
   return {
     job: { ...toQueueRow(job), street: job.street, city: job.city },
-    revision: { number: revision.number, submittedAt: revision.submittedAt.toISOString(), record: revision.data, files: revision.files, findings: revision.findings, stationAnalysis: revision.stationAnalysis },
+    revision: {
+      number: revision.number,
+      submittedAt: revision.submittedAt.toISOString(),
+      record: revision.data,
+      files: revision.files,
+      findings: revision.findings,
+      stationAnalysis: revision.stationAnalysis,
+    },
     rubric: toRubricView(rubric),
     applicable: applicability(rubric.criteria, revision.data),
     claimExpiresAt: secondClaim !== undefined ? secondClaim : job.claimExpiresAt ? job.claimExpiresAt.toISOString() : null,
@@ -90,9 +96,17 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
     const now = new Date();
     const review = await Review.create(
       {
-        jobId, revisionNumber: revision.number, reviewerId: actor.id, rubricId: rubric.id, kind: 'primary',
-        score: evaluation.score, passed: evaluation.passed, decision: input.decision,
-        claimedAt: job.claimedAt, decidedAt: now, dueAt: job.effectiveDueAt,
+        jobId,
+        revisionNumber: revision.number,
+        reviewerId: actor.id,
+        rubricId: rubric.id,
+        kind: 'primary',
+        score: evaluation.score,
+        passed: evaluation.passed,
+        decision: input.decision,
+        claimedAt: job.claimedAt,
+        decidedAt: now,
+        dueAt: job.effectiveDueAt,
       },
       { transaction },
     );
@@ -101,13 +115,27 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
 
     const failing = rubric.criteria.filter((c) => isBelowFullMarks(c, sheet[c.key]));
     const byKey = new Map(input.scores.map((s) => [s.key, s]));
-    const itemFacts = failing.map((c) => ({ title: c.title, instruction: byKey.get(c.key)!.comment.trim(), stockReason: byKey.get(c.key)!.stockReason || null }));
+    const itemFacts = failing.map((c) => ({
+      title: c.title,
+      instruction: byKey.get(c.key)!.comment.trim(),
+      stockReason: byKey.get(c.key)!.stockReason || null,
+    }));
     if (input.decision === 'rework') {
       await ReworkItem.bulkCreate(
         failing.map((c) => ({
-          reviewId: review.id, jobId, criterionKey: c.key, title: c.title,
-          instruction: byKey.get(c.key)!.comment.trim(), stockReason: byKey.get(c.key)!.stockReason,
-          response: null, responseNote: null, respondedAt: null, disputeOutcome: null, disputeNote: null, disputeDecidedById: null, disputeDecidedAt: null,
+          reviewId: review.id,
+          jobId,
+          criterionKey: c.key,
+          title: c.title,
+          instruction: byKey.get(c.key)!.comment.trim(),
+          stockReason: byKey.get(c.key)!.stockReason,
+          response: null,
+          responseNote: null,
+          respondedAt: null,
+          disputeOutcome: null,
+          disputeNote: null,
+          disputeDecidedById: null,
+          disputeDecidedAt: null,
         })),
         { transaction },
       );
@@ -119,19 +147,53 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
     job.claimExpiresAt = null;
     await job.save({ transaction });
     await recordEvent(transaction, jobId, actor.id, 'reviewed', {
-      decision: input.decision, score: evaluation.score, passed: evaluation.passed, rubricVersion: rubric.version, revision: revision.number,
+      decision: input.decision,
+      score: evaluation.score,
+      passed: evaluation.passed,
+      rubricVersion: rubric.version,
+      revision: revision.number,
     });
-    await queueDecisionEmail(transaction, job, input.decision, { revision: revision.number, score: evaluation.score, items: itemFacts, reviewerName: actor.name, decidedAt: now });
+    await queueDecisionEmail(transaction, job, input.decision, {
+      revision: revision.number,
+      score: evaluation.score,
+      items: itemFacts,
+      reviewerName: actor.name,
+      decidedAt: now,
+    });
 
     const sampled = input.decision === 'accept' && shouldSampleSecondReview(config.review.secondReviewShare, random);
     if (sampled) {
-      await SecondReview.create({ jobId, revisionNumber: revision.number, firstReviewId: review.id, firstReviewerId: actor.id, secondReviewId: null, claimedById: null, claimExpiresAt: null }, { transaction });
+      await SecondReview.create(
+        {
+          jobId,
+          revisionNumber: revision.number,
+          firstReviewId: review.id,
+          firstReviewerId: actor.id,
+          secondReviewId: null,
+          claimedById: null,
+          claimExpiresAt: null,
+        },
+        { transaction },
+      );
     }
-    return { reviewId: review.id, score: evaluation.score, passed: evaluation.passed, decision: input.decision, failedRules: evaluation.failedRules, sampledForSecondReview: sampled };
+    return {
+      reviewId: review.id,
+      score: evaluation.score,
+      passed: evaluation.passed,
+      decision: input.decision,
+      failedRules: evaluation.failedRules,
+      sampledForSecondReview: sampled,
+    };
   });
 }
 
-async function saveScores(reviewId: number, criteria: Criterion[], scores: ScoreInput[], transaction: import('sequelize').Transaction, carried: Record<string, number | null> = {}) {
+async function saveScores(
+  reviewId: number,
+  criteria: Criterion[],
+  scores: ScoreInput[],
+  transaction: Transaction,
+  carried: Record<string, number | null> = {},
+) {
   const byKey = new Map(scores.map((s) => [s.key, s]));
   await ReviewScore.bulkCreate(
     criteria.map((c) => {
@@ -139,22 +201,33 @@ async function saveScores(reviewId: number, criteria: Criterion[], scores: Score
       const score = s?.score ?? null;
       // Marked carried over when the reviewer kept the score offered from the last review.
       const carriedOver = c.key in carried && carried[c.key] === score;
-      return { reviewId, criterionKey: c.key, score, maxScore: scaleMax(c.scale), stockReason: s?.stockReason || null, comment: s?.comment.trim() || null, carriedOver };
+      return {
+        reviewId,
+        criterionKey: c.key,
+        score,
+        maxScore: scaleMax(c.scale),
+        stockReason: s?.stockReason || null,
+        comment: s?.comment.trim() || null,
+        carriedOver,
+      };
     }),
     { transaction },
   );
 }
 
 // The last primary review of an earlier revision, if any: the one a resubmission answers.
-async function previousReview(jobId: number, currentRevision: number, transaction?: import('sequelize').Transaction) {
+async function previousReview(jobId: number, currentRevision: number, transaction?: Transaction) {
   return Review.findOne({
     where: { jobId, kind: 'primary', revisionNumber: { [Op.lt]: currentRevision } },
-    order: [['revisionNumber', 'DESC'], ['id', 'DESC']],
+    order: [
+      ['revisionNumber', 'DESC'],
+      ['id', 'DESC'],
+    ],
     transaction,
   });
 }
 
-async function changesSince(jobId: number, previousNumber: number, currentNumber: number, transaction?: import('sequelize').Transaction) {
+async function changesSince(jobId: number, previousNumber: number, currentNumber: number, transaction?: Transaction) {
   const [before, after] = await Promise.all([
     CaptureRevision.findOne({ where: { jobId, number: previousNumber }, transaction }),
     CaptureRevision.findOne({ where: { jobId, number: currentNumber }, transaction }),
@@ -163,7 +236,7 @@ async function changesSince(jobId: number, previousNumber: number, currentNumber
 }
 
 // Scores from the previous review for criteria whose inputs did not change.
-export async function carriedOverScores(jobId: number, currentRevision: number, transaction?: import('sequelize').Transaction) {
+export async function carriedOverScores(jobId: number, currentRevision: number, transaction?: Transaction) {
   const previous = await previousReview(jobId, currentRevision, transaction);
   if (!previous) return {};
   const changes = await changesSince(jobId, previous.revisionNumber, currentRevision, transaction);
@@ -180,9 +253,18 @@ export async function previousContext(jobId: number, currentRevision: number) {
     ReworkItem.findAll({ where: { reviewId: previous.id }, order: [['id', 'ASC']] }),
   ]);
   const carried = Object.fromEntries(
-    scores.filter((s) => carriesOver(s.criterionKey, changes)).map((s) => [s.criterionKey, { score: s.score, stockReason: s.stockReason, comment: s.comment ?? '' }]),
+    scores
+      .filter((s) => carriesOver(s.criterionKey, changes))
+      .map((s) => [s.criterionKey, { score: s.score, stockReason: s.stockReason, comment: s.comment ?? '' }]),
   );
-  return { revision: previous.revisionNumber, score: previous.score, decision: previous.decision, changes, items: items.map(toReworkItemView), carried };
+  return {
+    revision: previous.revisionNumber,
+    score: previous.score,
+    decision: previous.decision,
+    changes,
+    items: items.map(toReworkItemView),
+    carried,
+  };
 }
 
 export async function listOpenSecondReviews(actor: Actor): Promise<OpenSecondReview[]> {
@@ -197,7 +279,13 @@ export async function listOpenSecondReviews(actor: Actor): Promise<OpenSecondRev
   });
   const jobs = await Job.findAll({ where: { id: { [Op.in]: rows.map((r) => r.jobId) } }, attributes: ['id', 'claimReference'] });
   const refOf = new Map(jobs.map((j) => [j.id, j.claimReference]));
-  return rows.map((r) => ({ id: r.id, jobId: r.jobId, claimReference: refOf.get(r.jobId) ?? '', revision: r.revisionNumber, createdAt: r.createdAt.toISOString() }));
+  return rows.map((r) => ({
+    id: r.id,
+    jobId: r.jobId,
+    claimReference: refOf.get(r.jobId) ?? '',
+    revision: r.revisionNumber,
+    createdAt: r.createdAt.toISOString(),
+  }));
 }
 
 // Locks a blind second review to one reviewer, atomically, like a job claim.
@@ -209,9 +297,16 @@ export async function claimSecondReview(actor: Actor, secondReviewId: number) {
   const expiresAt = claimExpiresAt(now, config.review.claimMinutes);
   const [changed] = await SecondReview.update(
     { claimedById: actor.id, claimExpiresAt: expiresAt },
-    { where: { id: secondReviewId, secondReviewId: null, [Op.or]: [{ claimedById: null }, { claimExpiresAt: { [Op.lt]: now } }, { claimedById: actor.id }] } },
+    {
+      where: {
+        id: secondReviewId,
+        secondReviewId: null,
+        [Op.or]: [{ claimedById: null }, { claimExpiresAt: { [Op.lt]: now } }, { claimedById: actor.id }],
+      },
+    },
   );
-  if (changed === 0) throw conflict(second.secondReviewId ? 'This second review is already done.' : 'Another reviewer is scoring this second review.');
+  if (changed === 0)
+    throw conflict(second.secondReviewId ? 'This second review is already done.' : 'Another reviewer is scoring this second review.');
   return { secondReviewId, claimExpiresAt: expiresAt.toISOString() };
 }
 
@@ -237,8 +332,17 @@ export async function submitSecondReview(actor: Actor, secondReviewId: number, i
     const job = await Job.findByPk(second.jobId, { transaction });
     const review = await Review.create(
       {
-        jobId: second.jobId, revisionNumber: second.revisionNumber, reviewerId: actor.id, rubricId: rubric!.id, kind: 'blind_second',
-        score: evaluation.score, passed: evaluation.passed, decision: input.decision, claimedAt: null, decidedAt: new Date(), dueAt: job!.effectiveDueAt,
+        jobId: second.jobId,
+        revisionNumber: second.revisionNumber,
+        reviewerId: actor.id,
+        rubricId: rubric!.id,
+        kind: 'blind_second',
+        score: evaluation.score,
+        passed: evaluation.passed,
+        decision: input.decision,
+        claimedAt: null,
+        decidedAt: new Date(),
+        dueAt: job!.effectiveDueAt,
       },
       { transaction },
     );

@@ -1,4 +1,5 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
+
 import type { Dispute } from '../../shared/api-types';
 import type { ReworkItemView, ReworkResponse, TimelineEvent } from '../../shared/review';
 import { conflict, invalid, notFound } from '../errors';
@@ -10,14 +11,22 @@ type Actor = Express.User;
 
 export function toReworkItemView(item: ReworkItem): ReworkItemView {
   return {
-    id: item.id, criterionKey: item.criterionKey, title: item.title, instruction: item.instruction, stockReason: item.stockReason,
-    response: item.response, responseNote: item.responseNote, responseFileIds: item.responseFileIds ?? [], respondedAt: item.respondedAt ? item.respondedAt.toISOString() : null,
-    disputeOutcome: item.disputeOutcome, disputeNote: item.disputeNote,
+    id: item.id,
+    criterionKey: item.criterionKey,
+    title: item.title,
+    instruction: item.instruction,
+    stockReason: item.stockReason,
+    response: item.response,
+    responseNote: item.responseNote,
+    responseFileIds: item.responseFileIds ?? [],
+    respondedAt: item.respondedAt ? item.respondedAt.toISOString() : null,
+    disputeOutcome: item.disputeOutcome,
+    disputeNote: item.disputeNote,
   };
 }
 
 // The items of the job's latest rework request.
-export async function currentReworkItems(jobId: number, transaction?: import('sequelize').Transaction) {
+export async function currentReworkItems(jobId: number, transaction?: Transaction) {
   const review = await Review.findOne({ where: { jobId, kind: 'primary', decision: 'rework' }, order: [['id', 'DESC']], transaction });
   if (!review) return [];
   return ReworkItem.findAll({ where: { reviewId: review.id }, order: [['id', 'ASC']], transaction });
@@ -28,7 +37,11 @@ export async function listReworkItems(actor: Actor, jobId: number) {
   return (await currentReworkItems(jobId)).map(toReworkItemView);
 }
 
-export async function answerReworkItem(actor: Actor, itemId: number, answer: { response: ReworkResponse; note: string; fileIds?: number[] }) {
+export async function answerReworkItem(
+  actor: Actor,
+  itemId: number,
+  answer: { response: ReworkResponse; note: string; fileIds?: number[] },
+) {
   return sequelize.transaction(async (transaction) => {
     const item = await ReworkItem.findByPk(itemId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!item) throw notFound('Rework item');
@@ -39,26 +52,45 @@ export async function answerReworkItem(actor: Actor, itemId: number, answer: { r
     if (!current.some((i) => i.id === item.id)) throw conflict('This item belongs to an earlier review.');
     if (answer.response !== 'fixed' && !answer.note.trim()) throw invalid({ note: 'Give the reason' });
     const fileIds = [...new Set(answer.fileIds ?? [])];
-    if (fileIds.length && (await StoredFile.count({ where: { id: { [Op.in]: fileIds }, jobId: job.id, detachedAt: null }, transaction })) !== fileIds.length) {
+    if (
+      fileIds.length &&
+      (await StoredFile.count({ where: { id: { [Op.in]: fileIds }, jobId: job.id, detachedAt: null }, transaction })) !== fileIds.length
+    ) {
       throw invalid({ fileIds: 'A file is not attached to this job' });
     }
-    await item.update({ response: answer.response, responseNote: answer.note.trim() || null, responseFileIds: fileIds, respondedAt: new Date() }, { transaction });
+    await item.update(
+      { response: answer.response, responseNote: answer.note.trim() || null, responseFileIds: fileIds, respondedAt: new Date() },
+      { transaction },
+    );
     await recordEvent(transaction, job.id, actor.id, 'rework_answered', { itemId: item.id, title: item.title, response: answer.response });
     return toReworkItemView(item);
   });
 }
 
 // Resubmission needs an answer to every item of the current rework request.
-export async function assertReworkAnswered(jobId: number, transaction: import('sequelize').Transaction) {
+export async function assertReworkAnswered(jobId: number, transaction: Transaction) {
   const open = (await currentReworkItems(jobId, transaction)).filter((i) => i.response === null);
-  if (open.length) throw invalid({ rework: `Answer every rework item first (${open.length} open: ${open.map((i) => i.title).join(', ')}).` });
+  if (open.length)
+    throw invalid({ rework: `Answer every rework item first (${open.length} open: ${open.map((i) => i.title).join(', ')}).` });
 }
 
 export async function listOpenDisputes(): Promise<Dispute[]> {
-  const items = await ReworkItem.findAll({ where: { response: 'disputed', disputeOutcome: null }, order: [['respondedAt', 'ASC']], limit: 200 });
-  const jobs = await Job.findAll({ where: { id: { [Op.in]: items.map((i) => i.jobId) } }, include: [{ model: User, as: 'technician', attributes: ['name'] }] });
+  const items = await ReworkItem.findAll({
+    where: { response: 'disputed', disputeOutcome: null },
+    order: [['respondedAt', 'ASC']],
+    limit: 200,
+  });
+  const jobs = await Job.findAll({
+    where: { id: { [Op.in]: items.map((i) => i.jobId) } },
+    include: [{ model: User, as: 'technician', attributes: ['name'] }],
+  });
   const byId = new Map(jobs.map((j) => [j.id, j]));
-  return items.map((item) => ({ ...toReworkItemView(item), jobId: item.jobId, claimReference: byId.get(item.jobId)?.claimReference ?? '', technician: byId.get(item.jobId)?.technician?.name ?? '' }));
+  return items.map((item) => ({
+    ...toReworkItemView(item),
+    jobId: item.jobId,
+    claimReference: byId.get(item.jobId)?.claimReference ?? '',
+    technician: byId.get(item.jobId)?.technician?.name ?? '',
+  }));
 }
 
 export async function decideDispute(actor: Actor, itemId: number, decision: { outcome: 'upheld' | 'withdrawn'; note: string }) {
@@ -66,17 +98,36 @@ export async function decideDispute(actor: Actor, itemId: number, decision: { ou
     const item = await ReworkItem.findByPk(itemId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!item || item.response !== 'disputed') throw notFound('Disputed item');
     if (item.disputeOutcome) throw conflict('This dispute has already been decided.');
-    await item.update({ disputeOutcome: decision.outcome, disputeNote: decision.note.trim() || null, disputeDecidedById: actor.id, disputeDecidedAt: new Date() }, { transaction });
-    await recordEvent(transaction, item.jobId, actor.id, 'dispute_decided', { itemId: item.id, title: item.title, outcome: decision.outcome });
+    await item.update(
+      {
+        disputeOutcome: decision.outcome,
+        disputeNote: decision.note.trim() || null,
+        disputeDecidedById: actor.id,
+        disputeDecidedAt: new Date(),
+      },
+      { transaction },
+    );
+    await recordEvent(transaction, item.jobId, actor.id, 'dispute_decided', {
+      itemId: item.id,
+      title: item.title,
+      outcome: decision.outcome,
+    });
     return toReworkItemView(item);
   });
 }
 
 export async function jobTimeline(actor: Actor, jobId: number): Promise<TimelineEvent[]> {
   await findJobFor(actor, jobId);
-  const events = await AuditEvent.findAll({ where: { jobId }, include: [{ model: User, as: 'actor', attributes: ['name'] }], order: [['id', 'ASC']] });
+  const events = await AuditEvent.findAll({
+    where: { jobId },
+    include: [{ model: User, as: 'actor', attributes: ['name'] }],
+    order: [['id', 'ASC']],
+  });
   return events.map((e) => ({
-    id: Number(e.id), type: e.type, data: e.data as Record<string, unknown>, createdAt: e.createdAt.toISOString(),
+    id: Number(e.id),
+    type: e.type,
+    data: e.data as Record<string, unknown>,
+    createdAt: e.createdAt.toISOString(),
     actor: (e.get('actor') as User | null)?.name ?? null,
   }));
 }

@@ -1,10 +1,17 @@
 import type { Transaction } from 'sequelize';
+
 import type { Rubric as RubricView, RubricDefinition } from '../../shared/rubric';
 import { HttpError } from '../errors';
 import { Rubric, sequelize } from '../models';
 
 export function toRubricView(rubric: Rubric): RubricView {
-  return { id: rubric.id, version: rubric.version, passMark: rubric.passMark, criteria: rubric.criteria, createdAt: rubric.createdAt.toISOString() };
+  return {
+    id: rubric.id,
+    version: rubric.version,
+    passMark: rubric.passMark,
+    criteria: rubric.criteria,
+    createdAt: rubric.createdAt.toISOString(),
+  };
 }
 
 export async function currentRubric(transaction?: Transaction): Promise<Rubric> {

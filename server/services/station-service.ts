@@ -1,7 +1,8 @@
 import type { Transaction } from 'sequelize';
-import { roomAreaM2, type CaptureRecord } from '../../shared/capture-record';
+
+import { type CaptureRecord, roomAreaM2 } from '../../shared/capture-record';
 import { analyseStations, type StationAnalysis } from '../../shared/station-analysis';
-import { parseStationFile, type FileProblem } from '../../shared/station-file';
+import { type FileProblem, parseStationFile } from '../../shared/station-file';
 import { config } from '../config';
 import { HttpError, invalid, notFound } from '../errors';
 import { CaptureDraft, CaptureRevision, StoredFile } from '../models';
@@ -14,7 +15,10 @@ type Actor = Express.User;
 export function assertValidStationFile(buffer: Buffer) {
   const { problems } = parseStationFile(buffer.toString('utf8'));
   if (problems.length) {
-    const listed = problems.slice(0, 8).map((p: FileProblem) => `line ${p.line}, ${p.column}: ${p.message}`).join('; ');
+    const listed = problems
+      .slice(0, 8)
+      .map((p: FileProblem) => `line ${p.line}, ${p.column}: ${p.message}`)
+      .join('; ');
     throw invalid({ file: `The station file has ${problems.length} problem(s): ${listed}${problems.length > 8 ? '; …' : ''}` });
   }
 }
@@ -39,8 +43,16 @@ export function analyseFor(record: CaptureRecord, text: string): StationAnalysis
 }
 
 // The newest station file attached to the job's working record, analysed against a record.
-export async function analyseAttachedFile(jobId: number, record: CaptureRecord, transaction?: Transaction): Promise<StationAnalysis | null> {
-  const file = await StoredFile.findOne({ where: { jobId, kind: 'station_coordinates', detachedAt: null }, order: [['id', 'DESC']], transaction });
+export async function analyseAttachedFile(
+  jobId: number,
+  record: CaptureRecord,
+  transaction?: Transaction,
+): Promise<StationAnalysis | null> {
+  const file = await StoredFile.findOne({
+    where: { jobId, kind: 'station_coordinates', detachedAt: null },
+    order: [['id', 'DESC']],
+    transaction,
+  });
   if (!file) return null;
   return analyseFor(record, await readText(file.storageKey));
 }

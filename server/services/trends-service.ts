@@ -1,10 +1,17 @@
 // Quality trends. Counting and averaging happen in MariaDB (GROUP BY over indexed columns);
 // Node only turns the aggregates into intervals, control limits and kappa.
 import { QueryTypes } from 'sequelize';
+
 import { DECISIONS } from '../../shared/review';
 import { cohenKappa, landisKoch, pChart, wilsonInterval } from '../../shared/statistics';
 import {
-  MIN_REVIEWS_FOR_RATES, paretoBars, type Calibration, type ReviewerRow, type TeamRow, type TechnicianTrends, type TrendsQuery,
+  type Calibration,
+  MIN_REVIEWS_FOR_RATES,
+  paretoBars,
+  type ReviewerRow,
+  type TeamRow,
+  type TechnicianTrends,
+  type TrendsQuery,
 } from '../../shared/trends';
 import { notFound } from '../errors';
 import { sequelize, User } from '../models';
@@ -37,26 +44,42 @@ export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
   const weekly = await select<{ week: string; reviews: number; mean_score: string | null; rework: number }>(
     `SELECT DATE_FORMAT(DATE_SUB(DATE(r.decided_at), INTERVAL WEEKDAY(r.decided_at) DAY), '%Y-%m-%d') AS week,
             COUNT(*) AS reviews, AVG(r.score) AS mean_score, SUM(r.decision = 'rework') AS rework
-     ${FROM_PRIMARY} WHERE ${where} GROUP BY week ORDER BY week`, params);
+     ${FROM_PRIMARY} WHERE ${where} GROUP BY week ORDER BY week`,
+    params,
+  );
 
-  const [totals] = (await select<{ reviews: number; first_total: number; first_accepted: number; recaptures: number; mean_revisions: string | null }>(
+  const [totals] = (await select<{
+    reviews: number;
+    first_total: number;
+    first_accepted: number;
+    recaptures: number;
+    mean_revisions: string | null;
+  }>(
     `SELECT COUNT(*) AS reviews,
             SUM(r.revision_number = 1) AS first_total,
             SUM(r.revision_number = 1 AND r.decision = 'accept') AS first_accepted,
             SUM(r.decision = 'recapture') AS recaptures,
             AVG(CASE WHEN r.decision = 'accept' THEN r.revision_number END) AS mean_revisions
-     ${FROM_PRIMARY} WHERE ${where}`, params)) as [{ reviews: number; first_total: number; first_accepted: number; recaptures: number; mean_revisions: string | null }];
+     ${FROM_PRIMARY} WHERE ${where}`,
+    params,
+  )) as [{ reviews: number; first_total: number; first_accepted: number; recaptures: number; mean_revisions: string | null }];
 
   const medianRows = await select<{ median_hours: string | null }>(
     `SELECT MEDIAN(TIMESTAMPDIFF(HOUR, j.site_visit_date, r.decided_at)) OVER () AS median_hours
-     ${FROM_PRIMARY} WHERE ${where} AND r.decision = 'accept' AND j.site_visit_date IS NOT NULL LIMIT 1`, params);
+     ${FROM_PRIMARY} WHERE ${where} AND r.decision = 'accept' AND j.site_visit_date IS NOT NULL LIMIT 1`,
+    params,
+  );
 
   const criteria = await select<{ criterion_key: string; n: number }>(
     `SELECT rs.criterion_key, COUNT(*) AS n ${FROM_PRIMARY} JOIN review_scores rs ON rs.review_id = r.id
-     WHERE ${where} AND rs.score < rs.max_score GROUP BY rs.criterion_key`, params);
+     WHERE ${where} AND rs.score < rs.max_score GROUP BY rs.criterion_key`,
+    params,
+  );
   const reasons = await select<{ stock_reason: string; n: number }>(
     `SELECT rs.stock_reason, COUNT(*) AS n ${FROM_PRIMARY} JOIN review_scores rs ON rs.review_id = r.id
-     WHERE ${where} AND rs.stock_reason IS NOT NULL GROUP BY rs.stock_reason`, params);
+     WHERE ${where} AND rs.stock_reason IS NOT NULL GROUP BY rs.stock_reason`,
+    params,
+  );
   const titles = new Map((await currentRubric()).criteria.map((c) => [c.key, c.title]));
 
   const reviews = Number(totals.reviews);
@@ -80,7 +103,17 @@ export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
 
 export async function teamTable(f: Filters): Promise<TeamRow[]> {
   const where = primaryWhere({ ...f, technicianId: undefined });
-  const rows = await select<{ id: number; name: string; reviews: number; mean_score: string | null; first_total: number; first_accepted: number; rework: number; recaptures: number; mean_revisions: string | null }>(
+  const rows = await select<{
+    id: number;
+    name: string;
+    reviews: number;
+    mean_score: string | null;
+    first_total: number;
+    first_accepted: number;
+    rework: number;
+    recaptures: number;
+    mean_revisions: string | null;
+  }>(
     `SELECT u.id, u.name, COUNT(x.id) AS reviews, AVG(x.score) AS mean_score,
             SUM(x.revision_number = 1) AS first_total, SUM(x.revision_number = 1 AND x.decision = 'accept') AS first_accepted,
             SUM(x.decision = 'rework') AS rework, SUM(x.decision = 'recapture') AS recaptures,
@@ -88,10 +121,14 @@ export async function teamTable(f: Filters): Promise<TeamRow[]> {
      FROM users u
      LEFT JOIN (SELECT r.id, r.score, r.revision_number, r.decision, j.technician_id ${FROM_PRIMARY} WHERE ${where}) x ON x.technician_id = u.id
      WHERE u.role = 'technician' AND u.active = 1
-     GROUP BY u.id, u.name ORDER BY u.name`, f);
+     GROUP BY u.id, u.name ORDER BY u.name`,
+    f,
+  );
   const medians = await select<{ technician_id: number; median_hours: string }>(
     `SELECT DISTINCT j.technician_id, MEDIAN(TIMESTAMPDIFF(HOUR, j.site_visit_date, r.decided_at)) OVER (PARTITION BY j.technician_id) AS median_hours
-     ${FROM_PRIMARY} WHERE ${where} AND r.decision = 'accept' AND j.site_visit_date IS NOT NULL`, f);
+     ${FROM_PRIMARY} WHERE ${where} AND r.decision = 'accept' AND j.site_visit_date IS NOT NULL`,
+    f,
+  );
   const medianOf = new Map(medians.map((m) => [Number(m.technician_id), Number(m.median_hours)]));
   return rows.map((r) => {
     const reviews = Number(r.reviews);
@@ -116,11 +153,15 @@ export async function reviewerTable(f: Filters): Promise<ReviewerRow[]> {
     `SELECT u.id, u.name, COUNT(r.id) AS reviews, SUM(r.decided_at > r.due_at) AS late
      FROM users u LEFT JOIN reviews r ON r.reviewer_id = u.id AND r.kind = 'primary'
        AND r.decided_at >= :from AND r.decided_at < DATE_ADD(:to, INTERVAL 1 DAY)
-     WHERE u.role = 'reviewer' AND u.active = 1 GROUP BY u.id, u.name ORDER BY u.name`, f);
+     WHERE u.role = 'reviewer' AND u.active = 1 GROUP BY u.id, u.name ORDER BY u.name`,
+    f,
+  );
   const medians = await select<{ reviewer_id: number; median_minutes: string }>(
     `SELECT DISTINCT r.reviewer_id, MEDIAN(TIMESTAMPDIFF(MINUTE, r.claimed_at, r.decided_at)) OVER (PARTITION BY r.reviewer_id) AS median_minutes
      FROM reviews r WHERE r.kind = 'primary' AND r.claimed_at IS NOT NULL
-       AND r.decided_at >= :from AND r.decided_at < DATE_ADD(:to, INTERVAL 1 DAY)`, f);
+       AND r.decided_at >= :from AND r.decided_at < DATE_ADD(:to, INTERVAL 1 DAY)`,
+    f,
+  );
   const medianOf = new Map(medians.map((m) => [Number(m.reviewer_id), Number(m.median_minutes)]));
   return rows.map((r) => ({
     reviewer: { id: r.id, name: r.name },
@@ -136,19 +177,27 @@ export async function calibration(f: Filters): Promise<Calibration> {
   const period = `s.decided_at >= :from AND s.decided_at < DATE_ADD(:to, INTERVAL 1 DAY)`;
   const pairsFrom = `FROM second_reviews sr JOIN reviews f ON f.id = sr.first_review_id JOIN reviews s ON s.id = sr.second_review_id`;
   const decisions = await select<{ a: string; b: string; n: number }>(
-    `SELECT f.decision AS a, s.decision AS b, COUNT(*) AS n ${pairsFrom} WHERE ${period} GROUP BY f.decision, s.decision`, f);
+    `SELECT f.decision AS a, s.decision AS b, COUNT(*) AS n ${pairsFrom} WHERE ${period} GROUP BY f.decision, s.decision`,
+    f,
+  );
   const scores = await select<{ a: number; b: number; n: number }>(
     `SELECT fs.score AS a, ss.score AS b, COUNT(*) AS n ${pairsFrom}
      JOIN review_scores fs ON fs.review_id = f.id
      JOIN review_scores ss ON ss.review_id = s.id AND ss.criterion_key = fs.criterion_key
      WHERE ${period} AND fs.max_score = 4 AND fs.score IS NOT NULL AND ss.score IS NOT NULL
-     GROUP BY fs.score, ss.score`, f);
+     GROUP BY fs.score, ss.score`,
+    f,
+  );
   const [summary] = (await select<{ pairs: number; mad: string | null }>(
-    `SELECT COUNT(*) AS pairs, AVG(ABS(f.score - s.score)) AS mad ${pairsFrom} WHERE ${period}`, f)) as [{ pairs: number; mad: string | null }];
+    `SELECT COUNT(*) AS pairs, AVG(ABS(f.score - s.score)) AS mad ${pairsFrom} WHERE ${period}`,
+    f,
+  )) as [{ pairs: number; mad: string | null }];
   const perPair = await select<{ r1: string; r2: string; a: string; b: string; n: number }>(
     `SELECT LEAST(fu.name, su.name) AS r1, GREATEST(fu.name, su.name) AS r2, f.decision AS a, s.decision AS b, COUNT(*) AS n ${pairsFrom}
      JOIN users fu ON fu.id = f.reviewer_id JOIN users su ON su.id = s.reviewer_id
-     WHERE ${period} GROUP BY r1, r2, f.decision, s.decision`, f);
+     WHERE ${period} GROUP BY r1, r2, f.decision, s.decision`,
+    f,
+  );
 
   const decisionTable = (rows: { a: string; b: string; n: number }[]) =>
     DECISIONS.map((a) => DECISIONS.map((b) => Number(rows.find((r) => r.a === a && r.b === b)?.n ?? 0)));
@@ -161,7 +210,10 @@ export async function calibration(f: Filters): Promise<Calibration> {
   return {
     pairs: Number(summary.pairs),
     decisions: stat(decisionTable(decisions), null),
-    criterionScores: stat(SCORE_LEVELS.map((a) => SCORE_LEVELS.map((b) => Number(scores.find((r) => Number(r.a) === a && Number(r.b) === b)?.n ?? 0))), 'linear'),
+    criterionScores: stat(
+      SCORE_LEVELS.map((a) => SCORE_LEVELS.map((b) => Number(scores.find((r) => Number(r.a) === a && Number(r.b) === b)?.n ?? 0))),
+      'linear',
+    ),
     meanAbsoluteScoreDifference: num(summary.mad),
     reviewerPairs: pairNames.map((key) => {
       const [r1, r2] = key.split('\u0000');

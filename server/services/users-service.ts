@@ -1,6 +1,7 @@
 import bcrypt from 'bcryptjs';
-import type { Role } from '../../shared/roles';
+
 import type { SessionUser, UserRow } from '../../shared/api-types';
+import type { Role } from '../../shared/roles';
 import { conflict, HttpError, notFound } from '../errors';
 import { sequelize, Session, User } from '../models';
 
@@ -30,7 +31,12 @@ export async function listActiveReviewers(): Promise<{ id: number; name: string 
 }
 
 export async function listUsers(): Promise<UserRow[]> {
-  const users = await User.findAll({ order: [['role', 'ASC'], ['name', 'ASC']] });
+  const users = await User.findAll({
+    order: [
+      ['role', 'ASC'],
+      ['name', 'ASC'],
+    ],
+  });
   return users.map((u) => u.toRow());
 }
 
@@ -48,11 +54,7 @@ export async function createUser(input: { name: string; email: string; role: Rol
   return user.toRow();
 }
 
-export async function updateUser(
-  actorId: number,
-  id: number,
-  changes: { role?: Role; active?: boolean },
-): Promise<UserRow> {
+export async function updateUser(actorId: number, id: number, changes: { role?: Role; active?: boolean }): Promise<UserRow> {
   if (actorId === id && (changes.active === false || (changes.role && changes.role !== 'admin'))) {
     throw conflict('You cannot deactivate yourself or remove your own admin role.');
   }

@@ -1,7 +1,9 @@
 // Object storage through the S3 API. In development and tests the endpoint is the local
 // fake (scripts/fakes/s3.ts); production points the same code at a real bucket by config.
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
 import type { Readable } from 'node:stream';
+
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from '@aws-sdk/client-s3';
+
 import { config } from '../config';
 
 const client = new S3Client({

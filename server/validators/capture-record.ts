@@ -2,6 +2,7 @@
 // cross-field rules (station totals, split reasons, …) are checked at submit by the shared
 // pre-submit checks, so that autosave never loses a half-typed record.
 import { body } from 'express-validator';
+
 import {
   CAMERA_CLASSES,
   GAP_CAUSES,
@@ -29,7 +30,9 @@ export const captureRecordRules = [
   body('levels', 'A list of at most 10 levels').isArray({ max: 10 }),
   body('levels.*.level', oneOf(LEVEL_KINDS)).isIn(LEVEL_KINDS),
   count('levels.*.stations', 2000),
-  body('levels', 'Each level only once').custom((levels: { level: string }[]) => new Set(levels.map((l) => l.level)).size === levels.length),
+  body('levels', 'Each level only once').custom(
+    (levels: { level: string }[]) => new Set(levels.map((l) => l.level)).size === levels.length,
+  ),
 
   body('rooms', 'A list of at most 200 rooms').isArray({ max: 200 }),
   key('rooms.*.key'),
@@ -44,7 +47,9 @@ export const captureRecordRules = [
   body('rooms.*.reflective.*.kind', oneOf(REFLECTIVE_KINDS)).isIn(REFLECTIVE_KINDS),
   count('rooms.*.reflective.*.found', 100),
   count('rooms.*.reflective.*.flagged', 100),
-  body('rooms.*.reflective.*', 'Flagged cannot be more than found').custom((s: { found: number; flagged: number }) => Number(s.flagged) <= Number(s.found)),
+  body('rooms.*.reflective.*', 'Flagged cannot be more than found').custom(
+    (s: { found: number; flagged: number }) => Number(s.flagged) <= Number(s.found),
+  ),
 
   count('exteriorStations', 2000),
   body('totalStations', 'A whole number from 0 to 5000').optional({ values: 'null' }).isInt({ min: 0, max: 5000 }).toInt(),

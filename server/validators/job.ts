@@ -1,20 +1,30 @@
 import { body } from 'express-validator';
+
 import { LOSS_TYPES, PRIORITIES, PROPERTY_TYPES } from '../../shared/jobs';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 const today = () => new Date().toISOString().slice(0, 10);
 
 export const jobCreateRules = [
-  body('claimReference', 'Use 3 to 40 letters, digits or dashes').isString().trim().matches(/^[A-Za-z0-9-]{3,40}$/),
+  body('claimReference', 'Use 3 to 40 letters, digits or dashes')
+    .isString()
+    .trim()
+    .matches(/^[A-Za-z0-9-]{3,40}$/),
   body('street', 'Enter the street address').isString().trim().isLength({ min: 3, max: 160 }),
   body('city', 'Enter the city').isString().trim().isLength({ min: 2, max: 80 }),
   body('postcode', 'Enter the postcode').isString().trim().isLength({ min: 2, max: 16 }),
   body('propertyType', `Choose one of: ${PROPERTY_TYPES.join(', ')}`).isIn(PROPERTY_TYPES),
   body('lossType', `Choose one of: ${LOSS_TYPES.join(', ')}`).isIn(LOSS_TYPES),
   body('lossDate', 'Enter the loss date as YYYY-MM-DD, not in the future')
-    .isString().matches(ISO_DATE).isISO8601({ strict: true }).custom((v: string) => v <= today()),
+    .isString()
+    .matches(ISO_DATE)
+    .isISO8601({ strict: true })
+    .custom((v: string) => v <= today()),
   body('siteVisitDate', 'Enter the site-visit date as YYYY-MM-DD, on or after the loss date')
-    .optional({ values: 'null' }).isString().matches(ISO_DATE).isISO8601({ strict: true })
+    .optional({ values: 'null' })
+    .isString()
+    .matches(ISO_DATE)
+    .isISO8601({ strict: true })
     .custom((v: string, { req }) => typeof req.body.lossDate !== 'string' || v >= req.body.lossDate),
   body('dueAt', 'Enter the delivery due date and time').isISO8601({ strict: true }),
   body('priority', `Choose one of: ${PRIORITIES.join(', ')}`).isIn(PRIORITIES),
@@ -24,8 +34,15 @@ export const jobCreateRules = [
 export const jobUpdateRules = [
   body('technicianId', 'Choose a technician').optional().isInt({ min: 1 }).toInt(),
   body('dueAt', 'Enter the delivery due date and time').optional().isISO8601({ strict: true }),
-  body('priority', `Choose one of: ${PRIORITIES.join(', ')}`).optional().isIn(PRIORITIES),
-  body('siteVisitDate', 'Enter the site-visit date as YYYY-MM-DD').optional({ values: 'null' }).isString().matches(ISO_DATE).isISO8601({ strict: true }),
-  body().custom((v) => v && ['technicianId', 'dueAt', 'priority', 'siteVisitDate'].some((k) => v[k] !== undefined))
+  body('priority', `Choose one of: ${PRIORITIES.join(', ')}`)
+    .optional()
+    .isIn(PRIORITIES),
+  body('siteVisitDate', 'Enter the site-visit date as YYYY-MM-DD')
+    .optional({ values: 'null' })
+    .isString()
+    .matches(ISO_DATE)
+    .isISO8601({ strict: true }),
+  body()
+    .custom((v) => v && ['technicianId', 'dueAt', 'priority', 'siteVisitDate'].some((k) => v[k] !== undefined))
     .withMessage('Send at least one of technicianId, dueAt, priority, siteVisitDate'),
 ];

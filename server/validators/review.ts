@@ -1,4 +1,5 @@
 import { body, query } from 'express-validator';
+
 import { CAMERA_CLASSES } from '../../shared/capture-record';
 import { LOSS_TYPES, PRIORITIES } from '../../shared/jobs';
 import { DECISIONS, QUEUE_SORTS, QUEUE_STATUSES } from '../../shared/review';
@@ -12,7 +13,9 @@ export const queueQueryRules = [
   query('pageSize', 'From 5 to 100 rows').optional().isInt({ min: 5, max: 100 }).toInt(),
   query('sort', oneOf(QUEUE_SORTS)).optional().isIn(QUEUE_SORTS),
   query('dir', 'asc or desc').optional().isIn(['asc', 'desc']),
-  query('status', oneOf(QUEUE_STATUSES)).optional().isString()
+  query('status', oneOf(QUEUE_STATUSES))
+    .optional()
+    .isString()
     .custom((v: string) => v.split(',').every((s) => (QUEUE_STATUSES as string[]).includes(s))),
   query('technicianId', 'Must be a user id').optional().isInt({ min: 1 }).toInt(),
   query('lossType', oneOf(LOSS_TYPES)).optional().isIn(LOSS_TYPES),
@@ -26,7 +29,10 @@ export const reviewRules = [
   body('decision', oneOf(DECISIONS)).isIn(DECISIONS),
   body('scores', 'A list of criterion scores').isArray({ min: 1, max: 50 }),
   body('scores.*.key', 'Missing criterion key').isString().isLength({ min: 1, max: 40 }),
-  body('scores.*.score', 'A whole number from 0 to 4, or null when not applicable').optional({ values: 'null' }).isInt({ min: 0, max: 4 }).toInt(),
+  body('scores.*.score', 'A whole number from 0 to 4, or null when not applicable')
+    .optional({ values: 'null' })
+    .isInt({ min: 0, max: 4 })
+    .toInt(),
   body('scores.*.stockReason', 'Text of at most 120 characters').optional({ values: 'null' }).isString().isLength({ max: 120 }),
   body('scores.*.comment', 'Text of at most 2000 characters').isString().isLength({ max: 2000 }),
 ];
@@ -36,14 +42,18 @@ export const reassignRules = [
   body('jobIds', 'A list of job ids').optional().isArray({ min: 1, max: 200 }),
   body('jobIds.*', 'Job ids are whole numbers').isInt({ min: 1 }).toInt(),
   body('fromReviewerId', 'Choose the reviewer whose claims move').optional().isInt({ min: 1 }).toInt(),
-  body().custom((v) => v && (Array.isArray(v.jobIds) || v.fromReviewerId !== undefined)).withMessage('Send jobIds or fromReviewerId'),
+  body()
+    .custom((v) => v && (Array.isArray(v.jobIds) || v.fromReviewerId !== undefined))
+    .withMessage('Send jobIds or fromReviewerId'),
 ];
 
 const LEVEL_TEXT = 'Describe each of the five levels (0 to 4)';
 export const rubricRules = [
   body('passMark', 'A pass mark from 0 to 100').isFloat({ min: 0, max: 100 }).toFloat(),
   body('criteria', 'From 1 to 30 criteria').isArray({ min: 1, max: 30 }),
-  body('criteria.*.key', 'Lower-case letters, digits and underscores, up to 40').isString().matches(/^[a-z][a-z0-9_]{0,39}$/),
+  body('criteria.*.key', 'Lower-case letters, digits and underscores, up to 40')
+    .isString()
+    .matches(/^[a-z][a-z0-9_]{0,39}$/),
   body('criteria.*.title', 'A title of 2 to 120 characters').isString().trim().isLength({ min: 2, max: 120 }),
   body('criteria.*.guidance', 'At most 1000 characters').isString().isLength({ max: 1000 }),
   body('criteria.*.weight', 'A whole number from 1 to 100').isInt({ min: 1, max: 100 }).toInt(),
@@ -52,7 +62,9 @@ export const rubricRules = [
   body('criteria.*.scale.kind', 'levels or pass_fail').isIn(['levels', 'pass_fail']),
   body('criteria.*.scale.levels', LEVEL_TEXT).optional().isArray({ min: 5, max: 5 }),
   body('criteria.*.scale.levels.*', LEVEL_TEXT).isString().trim().isLength({ min: 1, max: 120 }),
-  body('criteria.*.scale', LEVEL_TEXT).custom((s: { kind: string; levels?: unknown[] }) => s.kind !== 'levels' || (Array.isArray(s.levels) && s.levels.length === 5)),
+  body('criteria.*.scale', LEVEL_TEXT).custom(
+    (s: { kind: string; levels?: unknown[] }) => s.kind !== 'levels' || (Array.isArray(s.levels) && s.levels.length === 5),
+  ),
   body('criteria.*.stockReasons', 'A list of at most 12 reasons').isArray({ max: 12 }),
   body('criteria.*.stockReasons.*', 'Reasons of 2 to 120 characters').isString().trim().isLength({ min: 2, max: 120 }),
   body('criteria').custom((criteria: Criterion[]) => {

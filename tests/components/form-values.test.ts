@@ -1,10 +1,26 @@
+import { emptyRoom, toFormValues, toRecord } from '@/components/capture-record/form-values';
 import { emptyCaptureRecord } from '@/shared/capture-record';
 import { feetToMetres } from '@/shared/units';
-import { toFormValues, toRecord, emptyRoom } from '@/components/capture-record/form-values';
 
 describe('capture record form values', () => {
   it('shows metres as feet when the technician works in feet, and stores SI again', () => {
-    const record = { ...emptyCaptureRecord(), units: 'ft' as const, rooms: [{ key: 'r1', name: 'Kitchen', level: 'ground' as const, lengthM: feetToMetres(12), widthM: feetToMetres(15), areaM2: null, stations: 5, doorwayStation: true, reflective: [] }] };
+    const record = {
+      ...emptyCaptureRecord(),
+      units: 'ft' as const,
+      rooms: [
+        {
+          key: 'r1',
+          name: 'Kitchen',
+          level: 'ground' as const,
+          lengthM: feetToMetres(12),
+          widthM: feetToMetres(15),
+          areaM2: null,
+          stations: 5,
+          doorwayStation: true,
+          reflective: [],
+        },
+      ],
+    };
     const values = toFormValues(record);
     expect(values.rooms[0].length).toBe('12');
     expect(values.rooms[0].width).toBe('15');
@@ -28,7 +44,9 @@ describe('capture record form values', () => {
 
   it('parses station numbers of a damage area from a typed list', () => {
     const values = toFormValues(emptyCaptureRecord());
-    values.damageAreas = [{ key: 'd1', roomKey: 'r1', description: 'Stain', lossType: 'water', stationNumbers: '4, 5 12', photoFileIds: [] }];
+    values.damageAreas = [
+      { key: 'd1', roomKey: 'r1', description: 'Stain', lossType: 'water', stationNumbers: '4, 5 12', photoFileIds: [] },
+    ];
     expect(toRecord(values).record.damageAreas[0].stationNumbers).toEqual([4, 5, 12]);
   });
 

@@ -1,5 +1,6 @@
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { fireEvent, render, screen, waitFor } from '@testing-library/react';
+
 import { SignInForm } from '@/components/auth/sign-in-form';
 
 function renderForm() {
@@ -38,7 +39,9 @@ describe('SignInForm', () => {
   });
 
   it('puts field errors from the server next to their fields', async () => {
-    respond(400, { error: { code: 'invalid_input', message: 'Please correct: email.', fields: { email: 'Enter a valid e-mail address' } } });
+    respond(400, {
+      error: { code: 'invalid_input', message: 'Please correct: email.', fields: { email: 'Enter a valid e-mail address' } },
+    });
     renderForm();
     fireEvent.change(screen.getByLabelText('E-mail'), { target: { value: 'a@b.cd' } });
     fireEvent.change(screen.getByLabelText('Password'), { target: { value: 'x' } });

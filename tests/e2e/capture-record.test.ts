@@ -1,6 +1,7 @@
 // A technician on a phone fills a capture record, uploads a photo, sees a pre-submit
 // warning, submits, and finds the job submitted.
 import type { BrowserContext, Page } from 'playwright-core';
+
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../seeders/data/demo-people';
 import { BASE_URL, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
 import { PNG_1X1 } from '../helpers/sample-files';
@@ -18,15 +19,26 @@ beforeAll(async () => {
   browser = await launchBrowser(PHONE);
   // A fresh job for the technician, created through the API as the manager would.
   const api = browser.request;
-  await api.post(`${BASE_URL}/api/session`, { headers: { 'x-sightline-request': '1' }, data: { email: manager.email, password: DEMO_PASSWORD } });
+  await api.post(`${BASE_URL}/api/session`, {
+    headers: { 'x-sightline-request': '1' },
+    data: { email: manager.email, password: DEMO_PASSWORD },
+  });
   const technicians = await (await api.get(`${BASE_URL}/api/technicians`)).json();
   const tess = technicians.technicians.find((t: { name: string }) => t.name === technician.name);
   const created = await api.post(`${BASE_URL}/api/jobs`, {
     headers: { 'x-sightline-request': '1' },
     data: {
-      claimReference, street: '9 Pennowick Street', city: 'Maraskell', postcode: 'MK-3310', propertyType: 'single_family',
-      lossType: 'water', lossDate: '2026-11-25', siteVisitDate: '2026-11-27', dueAt: new Date(Date.now() + 2 * 86_400_000).toISOString(),
-      priority: 'urgent', technicianId: tess.id,
+      claimReference,
+      street: '9 Pennowick Street',
+      city: 'Maraskell',
+      postcode: 'MK-3310',
+      propertyType: 'single_family',
+      lossType: 'water',
+      lossDate: '2026-11-25',
+      siteVisitDate: '2026-11-27',
+      dueAt: new Date(Date.now() + 2 * 86_400_000).toISOString(),
+      priority: 'urgent',
+      technicianId: tess.id,
     },
   });
   expect(created.status()).toBe(201);

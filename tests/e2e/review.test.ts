@@ -1,6 +1,7 @@
 // A reviewer on a wide screen filters the queue, claims with the keyboard, scores with the
 // keyboard, watches the live total and requests rework.
 import type { BrowserContext, Page } from 'playwright-core';
+
 import { DEMO_PASSWORD } from '../../seeders/data/demo-people';
 import { BASE_URL, DESKTOP, launchBrowser, screenshot, signIn } from '../helpers/browser';
 import { as, call, demoPerson, submittedJob } from '../helpers/e2e-api';
@@ -17,7 +18,13 @@ let technicianId: number;
 beforeAll(async () => {
   browser = await launchBrowser(DESKTOP);
   // Long overdue and hail, so it sorts first among this technician's hail jobs (overdue first, earliest due first).
-  jobId = await submittedJob(browser.request, { technician: 'jonah.', claimReference, dueInHours: -2000, record: completeRecord(), lossType: 'hail' });
+  jobId = await submittedJob(browser.request, {
+    technician: 'jonah.',
+    claimReference,
+    dueInHours: -2000,
+    record: completeRecord(),
+    lossType: 'hail',
+  });
   technicianId = await as(browser.request, 'mara.', async () => {
     const { technicians } = await call<{ technicians: { id: number; name: string }[] }>(browser.request, 'get', '/api/technicians');
     return technicians.find((t) => t.name === demoPerson('jonah.').name)!.id;
@@ -51,7 +58,9 @@ it('filters, claims and scores from the keyboard, then requests rework', async (
 
   // Keys: a score digit, then j to the next criterion. Non-applicable criteria ignore digits.
   for (const key of ['4', 'j', '4', 'j', '2', 'j', 'j', 'j', '4', 'j', 'j', 'j', 'p', 'j', '4']) await page.keyboard.press(key);
-  await page.getByLabel('Comment for Station spacing and doorway line of sight').fill('Hallway has one station for 16 ft: add one at each end.');
+  await page
+    .getByLabel('Comment for Station spacing and doorway line of sight')
+    .fill('Hallway has one station for 16 ft: add one at each end.');
 
   // Applicable weights 18+16+12+6+4+8 = 64; spacing 2 of 4 loses 6: 100 × 58 / 64 = 90.625 → 90.6.
   await page.getByText('90.6', { exact: true }).waitFor();

@@ -1,6 +1,7 @@
 // The loop that saves a second site visit: rework requested by e-mail, answered on a phone,
 // resubmitted, reviewed against the diff, accepted, and the acceptance e-mailed.
 import type { BrowserContext, Page } from 'playwright-core';
+
 import { DEMO_PASSWORD } from '../../seeders/data/demo-people';
 import { BASE_URL, DESKTOP, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
 import { demoPerson, submittedJob } from '../helpers/e2e-api';
@@ -36,7 +37,13 @@ async function waitForMail(page: Page, subject: string) {
 beforeAll(async () => {
   const setup = await launchBrowser(DESKTOP);
   contexts.push(setup);
-  jobId = await submittedJob(setup.request, { technician: 'wren.', claimReference, dueInHours: 0.5, record: completeRecord(), lossType: 'smoke' });
+  jobId = await submittedJob(setup.request, {
+    technician: 'wren.',
+    claimReference,
+    dueInHours: 0.5,
+    record: completeRecord(),
+    lossType: 'smoke',
+  });
 });
 
 afterAll(async () => {
@@ -51,7 +58,9 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
   await reviewer.getByText(/You hold the claim/).waitFor();
   await pressAll(reviewer, ['2', 'j', '4', 'j', '3', 'j', 'j', 'j', '4', 'j', 'j', 'j', 'p', 'j', '4']);
   await reviewer.getByLabel('Comment for Coverage completeness').fill('The attic is missing: capture it from the hatch.');
-  await reviewer.getByLabel('Comment for Station spacing and doorway line of sight').fill('Add a doorway station between the hall and the kitchen.');
+  await reviewer
+    .getByLabel('Comment for Station spacing and doorway line of sight')
+    .fill('Add a doorway station between the hall and the kitchen.');
   await reviewer.getByRole('radiogroup', { name: 'Decision' }).getByRole('radio', { name: 'Request rework' }).click();
   await reviewer.getByRole('button', { name: 'Record decision' }).click();
   await reviewer.waitForURL(/\/queue(\?.*)?$/);
@@ -59,18 +68,30 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
   // Admin, desktop: the rework request is in the mailbox.
   const admin = await open(DESKTOP, 'alex.');
   await waitForMail(admin, `Rework requested: ${claimReference}, revision 1`);
-  await admin.getByText(/The attic is missing: capture it from the hatch\./).first().waitFor();
+  await admin
+    .getByText(/The attic is missing: capture it from the hatch\./)
+    .first()
+    .waitFor();
   await screenshot(admin, 'mailbox-rework-request-desktop');
 
   // Technician, phone: answer both items, correct the record, resubmit.
   const technician = await open(PHONE, 'wren.');
   await technician.goto(`${BASE_URL}/jobs/${jobId}`);
   await technician.getByRole('heading', { name: 'Rework requested' }).waitFor();
-  for (const [n, note] of [[1, 'Captured the attic from the hatch: 3 stations.'], [2, 'Added a station in the hall doorway.']] as const) {
-    await technician.getByRole('radiogroup', { name: `Your answer to item ${n}` }).getByRole('radio', { name: 'Fixed' }).click();
+  for (const [n, note] of [
+    [1, 'Captured the attic from the hatch: 3 stations.'],
+    [2, 'Added a station in the hall doorway.'],
+  ] as const) {
+    await technician
+      .getByRole('radiogroup', { name: `Your answer to item ${n}` })
+      .getByRole('radio', { name: 'Fixed' })
+      .click();
     await technician.getByLabel(`What you did, or why (item ${n})`).fill(note);
     await technician.getByRole('button', { name: `Save answer ${n}` }).click();
-    await technician.getByText(`Answered: Fixed`).nth(n - 1).waitFor();
+    await technician
+      .getByText(`Answered: Fixed`)
+      .nth(n - 1)
+      .waitFor();
   }
   await technician.getByRole('button', { name: 'Notes, expand' }).click();
   await technician.getByLabel('Notes for the reviewer').fill('Attic and hall doorway added as asked.');
@@ -86,7 +107,10 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
   await reviewer.getByText('Resubmission: revision 1 → 2').waitFor();
   await reviewer.getByText('Answer: Captured the attic from the hatch: 3 stations.').waitFor();
   await reviewer.getByText(/Changed notes: — → Attic and hall doorway added as asked\./).waitFor();
-  await reviewer.getByText(/Carried over from revision 1/).first().waitFor();
+  await reviewer
+    .getByText(/Carried over from revision 1/)
+    .first()
+    .waitFor();
   await pressAll(reviewer, ['4', 'j', 'j', '4', 'j', 'j', 'j', 'j', 'j', 'j', 'j', '4']);
   await reviewer.getByText('100.0', { exact: true }).waitFor();
   await screenshot(reviewer, 'resubmission-review-desktop');

@@ -1,14 +1,18 @@
 import type { BrowserContext } from 'playwright-core';
+
 import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../seeders/data/demo-people';
 import { homeFor } from '../../shared/navigation';
-import { ROLES, ROLE_LABELS } from '../../shared/roles';
+import { ROLE_LABELS, ROLES } from '../../shared/roles';
 import { BASE_URL, DESKTOP, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
 
 jest.setTimeout(60_000);
 
 const HOME_TITLE = { technician: 'My jobs', reviewer: 'Queue', manager: 'Trends', admin: 'Users' } as const;
 
-for (const [label, viewport] of [['phone', PHONE], ['desktop', DESKTOP]] as const) {
+for (const [label, viewport] of [
+  ['phone', PHONE],
+  ['desktop', DESKTOP],
+] as const) {
   describe(`signing in on a ${label} (${viewport.width}x${viewport.height})`, () => {
     let browser: BrowserContext;
     beforeAll(async () => {

@@ -29,7 +29,10 @@ it('shows the technician the plan of their draft while still on site (390 × 844
     await page.getByRole('heading', { name: 'Station layout' }).waitFor();
     await page.getByText(/^Findings: \d+ registered station/).waitFor();
     await page.getByRole('button', { name: 'Zoom in' }).click();
-    await page.getByText(/Clark–Evans index R = /).first().scrollIntoViewIfNeeded();
+    await page
+      .getByText(/Clark–Evans index R = /)
+      .first()
+      .scrollIntoViewIfNeeded();
     await page.getByRole('heading', { name: 'Station layout' }).scrollIntoViewIfNeeded();
     await screenshot(page, 'station-plan-phone');
   } finally {
@@ -46,7 +49,10 @@ it('shows the reviewer the plan of a revision beside the rubric (1440 × 900)', 
     await page.waitForURL(`${BASE_URL}/queue`);
     await page.goto(`${BASE_URL}/queue/${jobId}`);
     await page.getByRole('heading', { name: 'Review MRK-26-1110' }).waitFor();
-    await page.getByText(/You hold the claim|Claim to score/).first().waitFor();
+    await page
+      .getByText(/You hold the claim|Claim to score/)
+      .first()
+      .waitFor();
     const claim = page.getByRole('button', { name: 'Claim to score' });
     if (await claim.isVisible()) await claim.click();
     await page.getByText(/You hold the claim/).waitFor();

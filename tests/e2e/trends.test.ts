@@ -6,7 +6,10 @@ import { demoPerson } from '../helpers/e2e-api';
 
 jest.setTimeout(120_000);
 
-for (const [label, viewport] of [['desktop', DESKTOP], ['phone', PHONE]] as const) {
+for (const [label, viewport] of [
+  ['desktop', DESKTOP],
+  ['phone', PHONE],
+] as const) {
   it(`shows the manager the team's trends on a ${label}`, async () => {
     const browser = await launchBrowser(viewport);
     try {
@@ -14,13 +17,25 @@ for (const [label, viewport] of [['desktop', DESKTOP], ['phone', PHONE]] as cons
       await signIn(page, demoPerson('mara.').email, DEMO_PASSWORD);
       await page.waitForURL(`${BASE_URL}/trends`);
       await page.getByRole('heading', { name: 'Mean score per week' }).waitFor();
-      await page.getByText(/^Summary: \d+ week\(s\); highest/).first().waitFor();
-      await page.getByText(/First-pass yield/).first().waitFor();
+      await page
+        .getByText(/^Summary: \d+ week\(s\); highest/)
+        .first()
+        .waitFor();
+      await page
+        .getByText(/First-pass yield/)
+        .first()
+        .waitFor();
       const table = page.getByRole('table', { name: 'Technicians compared' });
-      await table.getByRole('row').filter({ hasText: demoPerson('mateo.').name }).waitFor();
+      await table
+        .getByRole('row')
+        .filter({ hasText: demoPerson('mateo.').name })
+        .waitFor();
       await screenshot(page, `trends-${label}`);
 
-      await table.getByRole('row').filter({ hasText: demoPerson('jonah.').name }).click();
+      await table
+        .getByRole('row')
+        .filter({ hasText: demoPerson('jonah.').name })
+        .click();
       await page.getByRole('heading', { name: `Trends: ${demoPerson('jonah.').name}` }).waitFor();
       await page.getByRole('heading', { name: 'Most frequent shortfalls' }).waitFor();
       await screenshot(page, `trends-technician-${label}`);

@@ -1,7 +1,8 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
-import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+import { type BrowserContext, chromium, type Page } from 'playwright-core';
 
 export const BASE_URL = process.env.APP_URL ?? `http://127.0.0.1:${process.env.PORT ?? 8091}`;
 export const ARTIFACTS = path.resolve(__dirname, '..', 'e2e', 'artifacts');
@@ -15,8 +16,16 @@ export async function launchBrowser(viewport: { width: number; height: number })
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     viewport,
-    args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run',
-      '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
 }
 

@@ -1,13 +1,14 @@
 import crypto from 'node:crypto';
-import type { Role } from '../../shared/roles';
+
 import { CaptureDraft, CaptureRevision, Job, Review, ReworkItem, Rubric, SecondReview, StoredFile, User } from '../../server/models';
-import { criterionApplies, scaleMax } from '../../shared/rubric';
+import { hashPassword } from '../../server/services/users-service';
 import type { CaptureRecord } from '../../shared/capture-record';
-import { completeRecord } from './records';
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import type { FileKind } from '../../shared/files';
 import type { JobStatus } from '../../shared/jobs';
-import { hashPassword } from '../../server/services/users-service';
+import type { Role } from '../../shared/roles';
+import { criterionApplies, scaleMax } from '../../shared/rubric';
+import { completeRecord } from './records';
 
 export const TEST_PASSWORD = 'correct-horse-battery';
 let passwordHash: Promise<string> | undefined;
@@ -64,48 +65,114 @@ export async function createJob(overrides: Partial<{ technicianId: number; statu
 export function newJobBody(technicianId: number) {
   return {
     claimReference: `CLM-${Math.random().toString(36).slice(2, 10)}`,
-    street: '22 Tessaly Row', city: 'Maraskell', postcode: 'MK-2207',
-    propertyType: 'townhouse', lossType: 'water', lossDate: '2026-11-20', siteVisitDate: '2026-11-22',
-    dueAt: new Date(Date.now() + 5 * 86_400_000).toISOString(), priority: 'normal', technicianId,
+    street: '22 Tessaly Row',
+    city: 'Maraskell',
+    postcode: 'MK-2207',
+    propertyType: 'townhouse',
+    lossType: 'water',
+    lossDate: '2026-11-20',
+    siteVisitDate: '2026-11-22',
+    dueAt: new Date(Date.now() + 5 * 86_400_000).toISOString(),
+    priority: 'normal',
+    technicianId,
   };
 }
 
 export async function createRevision(job: Job, number: number, record: CaptureRecord = completeRecord(), submittedAt = new Date()) {
-  return CaptureRevision.create({ jobId: job.id, number, data: record, files: [], findings: { missing: [], warnings: [] }, submittedById: job.technicianId, submittedAt });
-}
-
-type ReviewOverrides = Partial<{ revisionNumber: number; rubricId: number; kind: 'primary' | 'blind_second'; score: number; claimedAt: Date | null; decidedAt: Date; dueAt: Date }>;
-
-// A decided review row; `passed` follows the decision unless the score says otherwise.
-export async function createReview(job: Job, reviewerId: number, decision: 'accept' | 'rework' | 'recapture', overrides: ReviewOverrides = {}) {
-  const rubricId = overrides.rubricId ?? (await Rubric.findOne({ order: [['version', 'DESC']] }))!.id;
-  return Review.create({
-    jobId: job.id, revisionNumber: overrides.revisionNumber ?? 1, reviewerId, rubricId, kind: overrides.kind ?? 'primary',
-    score: overrides.score ?? (decision === 'accept' ? 100 : 80), passed: decision === 'accept', decision,
-    claimedAt: overrides.claimedAt ?? null, decidedAt: overrides.decidedAt ?? new Date(), dueAt: overrides.dueAt ?? job.effectiveDueAt,
+  return CaptureRevision.create({
+    jobId: job.id,
+    number,
+    data: record,
+    files: [],
+    findings: { missing: [], warnings: [] },
+    submittedById: job.technicianId,
+    submittedAt,
   });
 }
 
-export async function createStoredFile(jobId: number, uploadedById: number, overrides: Partial<{ kind: FileKind; originalName: string; contentType: string; sizeBytes: number }> = {}) {
+type ReviewOverrides = Partial<{
+  revisionNumber: number;
+  rubricId: number;
+  kind: 'primary' | 'blind_second';
+  score: number;
+  claimedAt: Date | null;
+  decidedAt: Date;
+  dueAt: Date;
+}>;
+
+// A decided review row; `passed` follows the decision unless the score says otherwise.
+export async function createReview(
+  job: Job,
+  reviewerId: number,
+  decision: 'accept' | 'rework' | 'recapture',
+  overrides: ReviewOverrides = {},
+) {
+  const rubricId = overrides.rubricId ?? (await Rubric.findOne({ order: [['version', 'DESC']] }))!.id;
+  return Review.create({
+    jobId: job.id,
+    revisionNumber: overrides.revisionNumber ?? 1,
+    reviewerId,
+    rubricId,
+    kind: overrides.kind ?? 'primary',
+    score: overrides.score ?? (decision === 'accept' ? 100 : 80),
+    passed: decision === 'accept',
+    decision,
+    claimedAt: overrides.claimedAt ?? null,
+    decidedAt: overrides.decidedAt ?? new Date(),
+    dueAt: overrides.dueAt ?? job.effectiveDueAt,
+  });
+}
+
+export async function createStoredFile(
+  jobId: number,
+  uploadedById: number,
+  overrides: Partial<{ kind: FileKind; originalName: string; contentType: string; sizeBytes: number }> = {},
+) {
   return StoredFile.create({
-    jobId, kind: overrides.kind ?? 'photo', originalName: overrides.originalName ?? 'p.png', contentType: overrides.contentType ?? 'image/png',
-    sizeBytes: overrides.sizeBytes ?? 68, sha256: 'a'.repeat(64), storageKey: `jobs/${jobId}/test-${crypto.randomUUID()}`, uploadedById, detachedAt: null,
+    jobId,
+    kind: overrides.kind ?? 'photo',
+    originalName: overrides.originalName ?? 'p.png',
+    contentType: overrides.contentType ?? 'image/png',
+    sizeBytes: overrides.sizeBytes ?? 68,
+    sha256: 'a'.repeat(64),
+    storageKey: `jobs/${jobId}/test-${crypto.randomUUID()}`,
+    uploadedById,
+    detachedAt: null,
   });
 }
 
 // A job whose record was submitted as revision `revision` (default 1), waiting for review.
-export async function createSubmittedJob(overrides: Partial<{ technicianId: number; record: CaptureRecord; dueAt: Date; revision: number; priority: 'normal' | 'urgent' | 'catastrophe' }> = {}) {
+export async function createSubmittedJob(
+  overrides: Partial<{
+    technicianId: number;
+    record: CaptureRecord;
+    dueAt: Date;
+    revision: number;
+    priority: 'normal' | 'urgent' | 'catastrophe';
+  }> = {},
+) {
   const job = await createJob({ technicianId: overrides.technicianId, dueAt: overrides.dueAt });
   const record = overrides.record ?? completeRecord();
   const revision = overrides.revision ?? 1;
   const submittedAt = new Date();
   for (let n = 1; n <= revision; n++) await createRevision(job, n, record, submittedAt);
-  await job.update({ status: revision > 1 ? 'resubmitted' : 'submitted', currentRevision: revision, cameraClass: record.cameraClass, submittedAt, priority: overrides.priority ?? 'normal' });
+  await job.update({
+    status: revision > 1 ? 'resubmitted' : 'submitted',
+    currentRevision: revision,
+    cameraClass: record.cameraClass,
+    submittedAt,
+    priority: overrides.priority ?? 'normal',
+  });
   return job;
 }
 
 export async function claimFor(job: Job, reviewerId: number, minutesLeft = 30) {
-  await job.update({ claimedById: reviewerId, claimedAt: new Date(), claimExpiresAt: new Date(Date.now() + minutesLeft * 60_000), status: 'in_review' });
+  await job.update({
+    claimedById: reviewerId,
+    claimedAt: new Date(),
+    claimExpiresAt: new Date(Date.now() + minutesLeft * 60_000),
+    status: 'in_review',
+  });
   return job;
 }
 
@@ -126,7 +193,15 @@ export async function secondReviewByAnother() {
   const job = await createSubmittedJob();
   const review = await createReview(job, first.id, 'accept');
   await job.update({ status: 'accepted' });
-  return SecondReview.create({ jobId: job.id, revisionNumber: 1, firstReviewId: review.id, firstReviewerId: first.id, secondReviewId: null, claimedById: null, claimExpiresAt: null });
+  return SecondReview.create({
+    jobId: job.id,
+    revisionNumber: 1,
+    firstReviewId: review.id,
+    firstReviewerId: first.id,
+    secondReviewId: null,
+    claimedById: null,
+    claimExpiresAt: null,
+  });
 }
 
 // A job whose revision 1 got a rework request with one item ("coverage").
@@ -135,8 +210,19 @@ export async function reworkRequested(technicianId?: number) {
   const job = await createSubmittedJob({ technicianId });
   const review = await createReview(job, reviewer.id, 'rework');
   const item = await ReworkItem.create({
-    reviewId: review.id, jobId: job.id, criterionKey: 'coverage', title: 'Coverage completeness', instruction: 'Capture the attic', stockReason: null,
-    response: null, responseNote: null, respondedAt: null, disputeOutcome: null, disputeNote: null, disputeDecidedById: null, disputeDecidedAt: null,
+    reviewId: review.id,
+    jobId: job.id,
+    criterionKey: 'coverage',
+    title: 'Coverage completeness',
+    instruction: 'Capture the attic',
+    stockReason: null,
+    response: null,
+    responseNote: null,
+    respondedAt: null,
+    disputeOutcome: null,
+    disputeNote: null,
+    disputeDecidedById: null,
+    disputeDecidedAt: null,
   });
   await job.update({ status: 'rework_requested', pausedAt: new Date() });
   return { job, review, item, reviewer };

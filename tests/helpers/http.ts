@@ -1,8 +1,9 @@
 import type { Express } from 'express';
-import request from 'supertest';
 import { QueryTypes } from 'sequelize';
-import type { Role } from '../../shared/roles';
+import request from 'supertest';
+
 import { sequelize } from '../../server/models';
+import type { Role } from '../../shared/roles';
 import { createUser, TEST_PASSWORD } from './factories';
 
 export type Agent = ReturnType<typeof request.agent>;

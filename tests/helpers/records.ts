@@ -1,8 +1,19 @@
-import { emptyCaptureRecord, type CaptureRecord, type Room } from '../../shared/capture-record';
+import { type CaptureRecord, emptyCaptureRecord, type Room } from '../../shared/capture-record';
 import { feetToMetres } from '../../shared/units';
 
 export function room(overrides: Partial<Room> = {}): Room {
-  return { key: 'r1', name: 'Kitchen', level: 'ground', lengthM: null, widthM: null, areaM2: null, stations: 1, doorwayStation: true, reflective: [], ...overrides };
+  return {
+    key: 'r1',
+    name: 'Kitchen',
+    level: 'ground',
+    lengthM: null,
+    widthM: null,
+    areaM2: null,
+    stations: 1,
+    doorwayStation: true,
+    reflective: [],
+    ...overrides,
+  };
 }
 
 // A record with every required fact and nothing to warn about: one 12 ft × 15 ft kitchen

@@ -1,4 +1,5 @@
 import type { Router } from 'express';
+
 import { apiRouters } from '../../server/routes';
 
 // Lists "METHOD /full/path" for every route registered on the API routers.

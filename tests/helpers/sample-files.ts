@@ -13,7 +13,9 @@ export const JPEG_HEADER = Buffer.concat([
 
 export const PDF_MINIMAL = Buffer.from('%PDF-1.4\n1 0 obj << /Type /Catalog >> endobj\ntrailer << /Root 1 0 R >>\n%%EOF\n');
 
-export const STATION_CSV = Buffer.from('station,level,x,y,unit,room,kind\n1,ground,0,0,ft,Kitchen,station\n2,ground,5,0,ft,Kitchen,station\n');
+export const STATION_CSV = Buffer.from(
+  'station,level,x,y,unit,room,kind\n1,ground,0,0,ft,Kitchen,station\n2,ground,5,0,ft,Kitchen,station\n',
+);
 
 // An executable's header with an image's file name: must be refused.
 export const EXE_AS_JPG = Buffer.concat([Buffer.from('MZ'), Buffer.alloc(200, 0x90)]);

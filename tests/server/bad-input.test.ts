@@ -4,10 +4,10 @@ import { createApp } from '../../server/app';
 import { sequelize } from '../../server/models';
 import type { Role } from '../../shared/roles';
 import { claimFor, createJob, createSubmittedJob, createUser, reworkRequested, secondReviewByAnother } from '../helpers/factories';
+import { type Agent, countRows, resetSignInLimits, send, signedInAgent, type Upload } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
-import { PNG_1X1 } from '../helpers/sample-files';
-import { countRows, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
 import { registeredRoutes } from '../helpers/route-walk';
+import { PNG_1X1 } from '../helpers/sample-files';
 
 type BadInputCase = {
   as: Role | 'anonymous';
@@ -24,7 +24,12 @@ const NO_INPUT = ['DELETE /api/session', 'DELETE /api/jobs/:id/claim'];
 
 const CASES: Record<string, BadInputCase> = {
   'POST /api/session': { as: 'anonymous', tables: ['sessions'], body: { email: 'no', password: '' }, fields: ['email', 'password'] },
-  'POST /api/users': { as: 'admin', tables: ['users'], body: { name: '', email: 'x@', role: 'chief', password: '1' }, fields: ['email', 'name', 'password', 'role'] },
+  'POST /api/users': {
+    as: 'admin',
+    tables: ['users'],
+    body: { name: '', email: 'x@', role: 'chief', password: '1' },
+    fields: ['email', 'name', 'password', 'role'],
+  },
   'PATCH /api/users/:id': {
     as: 'admin',
     tables: ['users'],
@@ -35,8 +40,32 @@ const CASES: Record<string, BadInputCase> = {
   'POST /api/jobs': {
     as: 'manager',
     tables: ['jobs', 'capture_drafts'],
-    body: { claimReference: 'x', street: '', city: 'B', postcode: '', propertyType: 'castle', lossType: 'flood', lossDate: '2099-01-01', siteVisitDate: '11/02/2026', dueAt: 'soon', priority: 'asap', technicianId: 'tess' },
-    fields: ['city', 'claimReference', 'dueAt', 'lossDate', 'lossType', 'postcode', 'priority', 'propertyType', 'siteVisitDate', 'street', 'technicianId'],
+    body: {
+      claimReference: 'x',
+      street: '',
+      city: 'B',
+      postcode: '',
+      propertyType: 'castle',
+      lossType: 'flood',
+      lossDate: '2099-01-01',
+      siteVisitDate: '11/02/2026',
+      dueAt: 'soon',
+      priority: 'asap',
+      technicianId: 'tess',
+    },
+    fields: [
+      'city',
+      'claimReference',
+      'dueAt',
+      'lossDate',
+      'lossType',
+      'postcode',
+      'priority',
+      'propertyType',
+      'siteVisitDate',
+      'street',
+      'technicianId',
+    ],
   },
   'PATCH /api/jobs/:id': {
     as: 'manager',
@@ -75,42 +104,81 @@ const CASES: Record<string, BadInputCase> = {
     fields: ['fileId'],
   },
   'POST /api/jobs/:id/claim': {
-    as: 'reviewer', tables: ['audit_events'],
-    prepare: async () => ({ path: '/api/jobs/not-a-job/claim' }), body: {}, fields: ['id'],
+    as: 'reviewer',
+    tables: ['audit_events'],
+    prepare: async () => ({ path: '/api/jobs/not-a-job/claim' }),
+    body: {},
+    fields: ['id'],
   },
   'POST /api/claims/reassign': {
-    as: 'manager', tables: ['audit_events'],
-    body: { toReviewerId: 'ravi', jobIds: ['x'] }, fields: ['jobIds.0', 'toReviewerId'],
+    as: 'manager',
+    tables: ['audit_events'],
+    body: { toReviewerId: 'ravi', jobIds: ['x'] },
+    fields: ['jobIds.0', 'toReviewerId'],
   },
   'POST /api/jobs/:id/reviews': {
-    as: 'reviewer', tables: ['reviews', 'review_scores'],
+    as: 'reviewer',
+    tables: ['reviews', 'review_scores'],
     prepare: async (me) => ({ path: `/api/jobs/${(await claimFor(await createSubmittedJob(), me.id)).id}/reviews` }),
     body: { decision: 'shrug', scores: [{ key: 'coverage', score: 9, comment: 5 }] },
     fields: ['decision', 'scores.0.comment', 'scores.0.score'],
   },
   'POST /api/second-reviews/:id/claim': {
-    as: 'reviewer', tables: ['second_reviews'],
-    prepare: async () => ({ path: '/api/second-reviews/latest/claim' }), body: {}, fields: ['id'],
+    as: 'reviewer',
+    tables: ['second_reviews'],
+    prepare: async () => ({ path: '/api/second-reviews/latest/claim' }),
+    body: {},
+    fields: ['id'],
   },
   'POST /api/second-reviews/:id/reviews': {
-    as: 'reviewer', tables: ['reviews'],
+    as: 'reviewer',
+    tables: ['reviews'],
     prepare: async () => ({ path: `/api/second-reviews/${(await secondReviewByAnother()).id}/reviews` }),
-    body: { decision: 'accept', scores: 'all good' }, fields: ['scores'],
+    body: { decision: 'accept', scores: 'all good' },
+    fields: ['scores'],
   },
   'POST /api/rubrics': {
-    as: 'manager', tables: ['rubrics'],
-    body: { passMark: 120, criteria: [{ key: 'Bad Key', title: 'x', guidance: '', weight: 0, critical: 'no', appliesWhen: 'sometimes', scale: { kind: 'stars' }, stockReasons: [] }] },
-    fields: ['criteria', 'criteria.0.appliesWhen', 'criteria.0.critical', 'criteria.0.key', 'criteria.0.scale.kind', 'criteria.0.title', 'criteria.0.weight', 'passMark'],
+    as: 'manager',
+    tables: ['rubrics'],
+    body: {
+      passMark: 120,
+      criteria: [
+        {
+          key: 'Bad Key',
+          title: 'x',
+          guidance: '',
+          weight: 0,
+          critical: 'no',
+          appliesWhen: 'sometimes',
+          scale: { kind: 'stars' },
+          stockReasons: [],
+        },
+      ],
+    },
+    fields: [
+      'criteria',
+      'criteria.0.appliesWhen',
+      'criteria.0.critical',
+      'criteria.0.key',
+      'criteria.0.scale.kind',
+      'criteria.0.title',
+      'criteria.0.weight',
+      'passMark',
+    ],
   },
   'PUT /api/rework-items/:id/response': {
-    as: 'technician', tables: ['audit_events'],
+    as: 'technician',
+    tables: ['audit_events'],
     prepare: async (me) => ({ path: `/api/rework-items/${(await reworkRequested(me.id)).item.id}/response` }),
-    body: { response: 'shrug', note: 7 }, fields: ['note', 'response'],
+    body: { response: 'shrug', note: 7 },
+    fields: ['note', 'response'],
   },
   'PUT /api/rework-items/:id/dispute-outcome': {
-    as: 'manager', tables: ['audit_events'],
+    as: 'manager',
+    tables: ['audit_events'],
     prepare: async () => ({ path: `/api/rework-items/${(await reworkRequested()).item.id}/dispute-outcome` }),
-    body: { outcome: 'maybe' }, fields: ['note', 'outcome'],
+    body: { outcome: 'maybe' },
+    fields: ['note', 'outcome'],
   },
 };
 

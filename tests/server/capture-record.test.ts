@@ -1,4 +1,5 @@
 import { QueryTypes } from 'sequelize';
+
 import { createApp } from '../../server/app';
 import { CaptureRevision, Job, sequelize } from '../../server/models';
 import { feetToMetres } from '../../shared/units';
@@ -10,7 +11,6 @@ afterAll(async () => {
   await resetSignInLimits();
   await sequelize.close();
 });
-
 
 describe('PUT /api/jobs/:id/record', () => {
   it('autosaves an incomplete draft and returns it on the next load', async () => {
@@ -42,7 +42,9 @@ describe('PUT /api/jobs/:id/record', () => {
 describe('POST /api/jobs/:id/submit', () => {
   it('freezes revision 1, marks the job submitted and reports warnings without blocking', async () => {
     const { agent, job, user } = await technicianWithJob(app);
-    const record = completeRecord({ rooms: [room({ lengthM: feetToMetres(12), widthM: feetToMetres(15), stations: 5, doorwayStation: false })] });
+    const record = completeRecord({
+      rooms: [room({ lengthM: feetToMetres(12), widthM: feetToMetres(15), stations: 5, doorwayStation: false })],
+    });
     const res = await agent.post(`/api/jobs/${job.id}/submit`).send(record);
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ revision: 1, status: 'submitted' });
@@ -56,7 +58,9 @@ describe('POST /api/jobs/:id/submit', () => {
   it('refuses a record with missing facts, naming each field, and writes nothing', async () => {
     const { agent, job } = await technicianWithJob(app);
     const before = await countRows('capture_revisions');
-    const res = await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ totalStations: 9, processing: { confirmed: false, confirmedAt: null } }));
+    const res = await agent
+      .post(`/api/jobs/${job.id}/submit`)
+      .send(completeRecord({ totalStations: 9, processing: { confirmed: false, confirmedAt: null } }));
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({
       'processing.confirmed': 'Confirm that processing started on the capture platform.',
@@ -68,7 +72,9 @@ describe('POST /api/jobs/:id/submit', () => {
 
   it('refuses a damage-area photo that is not attached to the job', async () => {
     const { agent, job } = await technicianWithJob(app);
-    const record = completeRecord({ damageAreas: [{ key: 'd1', roomKey: 'r1', description: 'Stain', lossType: 'water', stationNumbers: [2], photoFileIds: [987654] }] });
+    const record = completeRecord({
+      damageAreas: [{ key: 'd1', roomKey: 'r1', description: 'Stain', lossType: 'water', stationNumbers: [2], photoFileIds: [987654] }],
+    });
     const res = await agent.post(`/api/jobs/${job.id}/submit`).send(record);
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({ 'damageAreas.0.photoFileIds': 'A photo is not attached to this job' });
@@ -95,7 +101,10 @@ describe('POST /api/jobs/:id/submit', () => {
     const { agent, job } = await technicianWithJob(app);
     await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ notes: 'as captured' }));
     await expect(
-      sequelize.query('UPDATE capture_revisions SET data = ? WHERE job_id = ?', { replacements: [JSON.stringify(completeRecord({ notes: 'rewritten' })), job.id], type: QueryTypes.UPDATE }),
+      sequelize.query('UPDATE capture_revisions SET data = ? WHERE job_id = ?', {
+        replacements: [JSON.stringify(completeRecord({ notes: 'rewritten' })), job.id],
+        type: QueryTypes.UPDATE,
+      }),
     ).rejects.toThrow(/immutable/);
     const revision = await CaptureRevision.findOne({ where: { jobId: job.id } });
     expect(revision!.data.notes).toBe('as captured');

@@ -1,4 +1,5 @@
 import crypto from 'node:crypto';
+
 import { createApp } from '../../server/app';
 import { sequelize, StoredFile } from '../../server/models';
 import { clientAgent, countRows, resetSignInLimits, signedInAgent, technicianWithJob } from '../helpers/http';
@@ -10,7 +11,6 @@ afterAll(async () => {
   await sequelize.close();
 });
 
-
 const sha256 = (b: Buffer) => crypto.createHash('sha256').update(b).digest('hex');
 
 describe('POST /api/jobs/:id/files', () => {
@@ -18,7 +18,13 @@ describe('POST /api/jobs/:id/files', () => {
     const { agent, job } = await technicianWithJob(app);
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'kitchen ceiling.png');
     expect(res.status).toBe(201);
-    expect(res.body.file).toMatchObject({ kind: 'photo', name: 'kitchen ceiling.png', contentType: 'image/png', sizeBytes: PNG_1X1.length, sha256: sha256(PNG_1X1) });
+    expect(res.body.file).toMatchObject({
+      kind: 'photo',
+      name: 'kitchen ceiling.png',
+      contentType: 'image/png',
+      sizeBytes: PNG_1X1.length,
+      sha256: sha256(PNG_1X1),
+    });
     const detail = await agent.get(`/api/jobs/${job.id}`);
     expect(detail.body.files.map((f: { id: number }) => f.id)).toEqual([res.body.file.id]);
   });
@@ -30,7 +36,10 @@ describe('POST /api/jobs/:id/files', () => {
     ['station_coordinates', STATION_CSV, 'stations.csv', 'text/csv'],
   ])('accepts a %s whose content is %s', async (kind, buffer, name, type) => {
     const { agent, job } = await technicianWithJob(app);
-    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', kind as string).attach('file', buffer as Buffer, name as string);
+    const res = await agent
+      .post(`/api/jobs/${job.id}/files`)
+      .field('kind', kind as string)
+      .attach('file', buffer as Buffer, name as string);
     expect(res.status).toBe(201);
     expect(res.body.file.contentType).toBe(type);
   });
@@ -42,7 +51,10 @@ describe('POST /api/jobs/:id/files', () => {
   ])('refuses %s by its content and writes nothing', async (_label, kind, buffer, name) => {
     const { agent, job } = await technicianWithJob(app);
     const before = await countRows('files');
-    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', kind as string).attach('file', buffer as Buffer, name as string);
+    const res = await agent
+      .post(`/api/jobs/${job.id}/files`)
+      .field('kind', kind as string)
+      .attach('file', buffer as Buffer, name as string);
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toHaveProperty('file');
     expect(await countRows('files')).toBe(before);
@@ -67,16 +79,19 @@ describe('POST /api/jobs/:id/files', () => {
 });
 
 describe('GET /api/files/:id', () => {
-  it('serves the stored bytes to the job\'s technician and to a reviewer, and to no one else', async () => {
+  it("serves the stored bytes to the job's technician and to a reviewer, and to no one else", async () => {
     const { agent, job } = await technicianWithJob(app);
     const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'p.png');
     const url = `/api/files/${upload.body.file.id}`;
 
-    const own = await agent.get(url).buffer(true).parse((res, cb) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const own = await agent
+      .get(url)
+      .buffer(true)
+      .parse((res, cb) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(own.status).toBe(200);
     expect(own.headers['content-type']).toBe('image/png');
     expect(sha256(own.body as Buffer)).toBe(sha256(PNG_1X1));

@@ -37,7 +37,7 @@ describe('GET /api/jobs', () => {
     expect(res.body.error.fields).toHaveProperty('status');
   });
 
-  it('shows a manager every technician\'s jobs', async () => {
+  it("shows a manager every technician's jobs", async () => {
     const { agent } = await signedInAgent(app, 'manager');
     const a = await createJob();
     const b = await createJob();
@@ -49,7 +49,7 @@ describe('GET /api/jobs', () => {
 });
 
 describe('GET /api/jobs/:id', () => {
-  it('answers 404 to a technician for another technician\'s job', async () => {
+  it("answers 404 to a technician for another technician's job", async () => {
     const { agent } = await signedInAgent(app, 'technician');
     const job = await createJob();
     expect((await agent.get(`/api/jobs/${job.id}`)).status).toBe(404);

@@ -109,8 +109,12 @@ describe('POST /api/jobs/:id/reviews', () => {
   it('requests rework: one item per criterion below full marks, with the instruction, and pauses the due clock', async () => {
     const { agent, job } = await claimedJob();
     const scores = (await fullScores()).map((s) =>
-      s.key === 'coverage' ? { ...s, score: 2, comment: 'Attic missing: capture it from the hatch', stockReason: 'Attic not captured' } :
-      s.key === 'record_accuracy' ? { ...s, score: 3, comment: 'Total station count is off by one' } : s);
+      s.key === 'coverage'
+        ? { ...s, score: 2, comment: 'Attic missing: capture it from the hatch', stockReason: 'Attic not captured' }
+        : s.key === 'record_accuracy'
+          ? { ...s, score: 3, comment: 'Total station count is off by one' }
+          : s,
+    );
     const res = await agent.post(`/api/jobs/${job.id}/reviews`).send({ decision: 'rework', scores });
     expect(res.status).toBe(201);
     const items = await ReworkItem.findAll({ where: { jobId: job.id }, order: [['id', 'ASC']] });
@@ -125,7 +129,9 @@ describe('POST /api/jobs/:id/reviews', () => {
 
   it('refuses to accept a failing review and writes nothing', async () => {
     const { agent, job } = await claimedJob();
-    const scores = (await fullScores()).map((s) => (s.key === 'registration' ? { ...s, score: 0, comment: 'Kitchen station misplaced' } : s));
+    const scores = (await fullScores()).map((s) =>
+      s.key === 'registration' ? { ...s, score: 0, comment: 'Kitchen station misplaced' } : s,
+    );
     const before = await countRows('reviews');
     const res = await agent.post(`/api/jobs/${job.id}/reviews`).send({ decision: 'accept', scores });
     expect(res.status).toBe(400);
@@ -139,7 +145,10 @@ describe('POST /api/jobs/:id/reviews', () => {
     const scores = (await fullScores()).filter((s) => s.key !== 'coverage').map((s) => (s.key === 'spacing' ? { ...s, score: 3 } : s));
     const res = await agent.post(`/api/jobs/${job.id}/reviews`).send({ decision: 'rework', scores });
     expect(res.status).toBe(400);
-    expect(res.body.error.fields).toEqual({ 'scores.coverage': 'Score this criterion', 'scores.spacing.comment': 'Explain what falls short' });
+    expect(res.body.error.fields).toEqual({
+      'scores.coverage': 'Score this criterion',
+      'scores.spacing.comment': 'Explain what falls short',
+    });
   });
 
   it('refuses a score on a criterion that does not apply', async () => {
@@ -250,8 +259,12 @@ describe('GET /api/queue', () => {
     const { agent, user } = await signedInAgent(app, 'reviewer');
     const first = await createSubmittedJob({ technicianId: technician.id });
     const resubmitted = await createSubmittedJob({ technicianId: technician.id, revision: 2 });
-    const mine = await claimFor(await createSubmittedJob({ technicianId: technician.id, record: completeRecord({ cameraClass: 'camera_360' }) }), user.id);
-    const ids = async (q: string) => (await agent.get(`/api/queue?technicianId=${technician.id}&${q}`)).body.rows.map((r: { id: number }) => r.id);
+    const mine = await claimFor(
+      await createSubmittedJob({ technicianId: technician.id, record: completeRecord({ cameraClass: 'camera_360' }) }),
+      user.id,
+    );
+    const ids = async (q: string) =>
+      (await agent.get(`/api/queue?technicianId=${technician.id}&${q}`)).body.rows.map((r: { id: number }) => r.id);
     expect(await ids('submission=resubmission')).toEqual([resubmitted.id]);
     expect(await ids('claimedByMe=true')).toEqual([mine.id]);
     expect(await ids('cameraClass=camera_360')).toEqual([mine.id]);
@@ -264,7 +277,10 @@ describe('GET /api/queue', () => {
     const live = await claimFor(await createSubmittedJob({ technicianId: technician.id }), holder.id, 10);
     const stale = await claimFor(await createSubmittedJob({ technicianId: technician.id }), holder.id, -5);
     const { agent } = await signedInAgent(app, 'manager');
-    const rows = (await agent.get(`/api/queue?technicianId=${technician.id}`)).body.rows as { id: number; claimedBy: { name: string } | null }[];
+    const rows = (await agent.get(`/api/queue?technicianId=${technician.id}`)).body.rows as {
+      id: number;
+      claimedBy: { name: string } | null;
+    }[];
     expect(rows.find((r) => r.id === live.id)!.claimedBy!.name).toBe('Holder Reviewer');
     expect(rows.find((r) => r.id === stale.id)!.claimedBy).toBeNull();
   });

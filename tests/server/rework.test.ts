@@ -1,12 +1,14 @@
-import { SMTPServer } from 'smtp-server';
+import type { AddressInfo } from 'node:net';
+
 import { simpleParser } from 'mailparser';
-import { AddressInfo } from 'node:net';
+import { SMTPServer } from 'smtp-server';
+
 import { createApp } from '../../server/app';
 import { createTransport } from '../../server/mail/transport';
+import { AuditEvent, Job, OutboxMessage, Review, sequelize } from '../../server/models';
 import * as outbox from '../../server/services/outbox-service';
 import { sendPendingEmails } from '../../server/services/outbox-service';
 import { queueOverdueReworkReminders } from '../../server/services/reminder-service';
-import { AuditEvent, Job, OutboxMessage, Review, sequelize } from '../../server/models';
 import { submitReview } from '../../server/services/review-service';
 import { claimFor, createSubmittedJob, createUser, fullScores, newJobBody, reworkRequested } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent } from '../helpers/http';
@@ -35,11 +37,13 @@ function smtpServer(port = 0) {
     },
   });
   return new Promise<{ port: number; received: Received[]; close: () => Promise<void> }>((resolve) => {
-    server.listen(port, '127.0.0.1', () => resolve({
-      port: (server.server.address() as AddressInfo).port,
-      received,
-      close: () => new Promise((done) => server.close(() => done())),
-    }));
+    server.listen(port, '127.0.0.1', () =>
+      resolve({
+        port: (server.server.address() as AddressInfo).port,
+        received,
+        close: () => new Promise((done) => server.close(() => done())),
+      }),
+    );
   });
 }
 
@@ -48,8 +52,12 @@ async function reworkDecision() {
   const technician = await createUser({ role: 'technician' });
   const job = await claimFor(await createSubmittedJob({ technicianId: technician.id }), reviewer.id);
   const scores = (await fullScores()).map((s) =>
-    s.key === 'coverage' ? { ...s, score: 2, comment: 'Attic not captured: capture it from the hatch', stockReason: 'Attic not captured' } :
-    s.key === 'spacing' ? { ...s, score: 3, comment: 'Add a doorway station between hall and kitchen' } : s);
+    s.key === 'coverage'
+      ? { ...s, score: 2, comment: 'Attic not captured: capture it from the hatch', stockReason: 'Attic not captured' }
+      : s.key === 'spacing'
+        ? { ...s, score: 3, comment: 'Add a doorway station between hall and kitchen' }
+        : s,
+  );
   const actor = { id: reviewer.id, name: reviewer.name, email: reviewer.email, role: 'reviewer' as const };
   await submitReview(actor, job.id, { decision: 'rework', scores });
   return { job, technician, reviewer };
@@ -68,7 +76,9 @@ describe('transactional outbox', () => {
     const job = await claimFor(await createSubmittedJob(), reviewer.id);
     const spy = jest.spyOn(outbox, 'enqueueEmail').mockRejectedValueOnce(new Error('outbox table unavailable'));
     const actor = { id: reviewer.id, name: reviewer.name, email: reviewer.email, role: 'reviewer' as const };
-    await expect(submitReview(actor, job.id, { decision: 'accept', scores: await fullScores() })).rejects.toThrow('outbox table unavailable');
+    await expect(submitReview(actor, job.id, { decision: 'accept', scores: await fullScores() })).rejects.toThrow(
+      'outbox table unavailable',
+    );
     spy.mockRestore();
     expect(await Review.count({ where: { jobId: job.id } })).toBe(0);
     expect((await Job.findByPk(job.id))!.status).toBe('in_review');
@@ -93,7 +103,10 @@ describe('transactional outbox', () => {
     try {
       const later = new Date(Date.now() + 60 * 60_000);
       // Two workers at once: the lease lets only one of them send the row.
-      await Promise.all([sendPendingEmails(createTransport(port), 'worker-a', later), sendPendingEmails(createTransport(port), 'worker-b', later)]);
+      await Promise.all([
+        sendPendingEmails(createTransport(port), 'worker-a', later),
+        sendPendingEmails(createTransport(port), 'worker-b', later),
+      ]);
       await sendPendingEmails(createTransport(port), 'worker-a', later);
       const mine = smtp.received.filter((m) => m.subject.includes(job.claimReference));
       expect(mine).toHaveLength(1);
@@ -135,13 +148,24 @@ describe('answering rework and resubmitting', () => {
     const noReason = await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'cannot_fix', note: ' ' });
     expect(noReason.body.error.fields).toEqual({ note: 'Give the reason' });
     const photo = await signed.agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'attic.png');
-    const foreign = await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'fixed', note: 'x', fileIds: [987654] });
+    const foreign = await signed.agent
+      .put(`/api/rework-items/${item.id}/response`)
+      .send({ response: 'fixed', note: 'x', fileIds: [987654] });
     expect(foreign.body.error.fields).toEqual({ fileIds: 'A file is not attached to this job' });
-    const answer = await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'fixed', note: 'Captured the attic from the hatch: 4 stations', fileIds: [photo.body.file.id] });
+    const answer = await signed.agent
+      .put(`/api/rework-items/${item.id}/response`)
+      .send({ response: 'fixed', note: 'Captured the attic from the hatch: 4 stations', fileIds: [photo.body.file.id] });
     expect(answer.status).toBe(200);
     expect(answer.body.item.responseFileIds).toEqual([photo.body.file.id]);
 
-    const record = completeRecord({ rooms: [...completeRecord().rooms, { ...completeRecord().rooms[0], key: 'r2', name: 'Attic', level: 'attic', stations: 4 }], totalStations: 9, levels: [{ level: 'ground', stations: 5 }, { level: 'attic', stations: 4 }] });
+    const record = completeRecord({
+      rooms: [...completeRecord().rooms, { ...completeRecord().rooms[0], key: 'r2', name: 'Attic', level: 'attic', stations: 4 }],
+      totalStations: 9,
+      levels: [
+        { level: 'ground', stations: 5 },
+        { level: 'attic', stations: 4 },
+      ],
+    });
     const resubmitted = await signed.agent.post(`/api/jobs/${job.id}/submit`).send(record);
     expect(resubmitted.status).toBe(201);
     expect(resubmitted.body).toMatchObject({ revision: 2, status: 'resubmitted' });
@@ -160,13 +184,23 @@ describe('answering rework and resubmitting', () => {
 
     const items = (await technician.agent.get(`/api/jobs/${job.id}/rework-items`)).body.items;
     await technician.agent.put(`/api/rework-items/${items[0].id}/response`).send({ response: 'fixed', note: 'Attic added' });
-    const record = completeRecord({ notes: 'Attic added', rooms: [...completeRecord().rooms, { ...completeRecord().rooms[0], key: 'r2', name: 'Attic', level: 'attic', stations: 1 }], totalStations: 6, levels: [{ level: 'ground', stations: 5 }, { level: 'attic', stations: 1 }] });
+    const record = completeRecord({
+      notes: 'Attic added',
+      rooms: [...completeRecord().rooms, { ...completeRecord().rooms[0], key: 'r2', name: 'Attic', level: 'attic', stations: 1 }],
+      totalStations: 6,
+      levels: [
+        { level: 'ground', stations: 5 },
+        { level: 'attic', stations: 1 },
+      ],
+    });
     expect((await technician.agent.post(`/api/jobs/${job.id}/submit`).send(record)).status).toBe(201);
 
     await reviewer.agent.post(`/api/jobs/${job.id}/claim`);
     const workspace = (await reviewer.agent.get(`/api/jobs/${job.id}/workspace`)).body;
     expect(workspace.previous.revision).toBe(1);
-    expect(workspace.previous.changes.map((c: { path: string }) => c.path)).toEqual(expect.arrayContaining(['notes', 'totalStations', 'rooms.r2']));
+    expect(workspace.previous.changes.map((c: { path: string }) => c.path)).toEqual(
+      expect.arrayContaining(['notes', 'totalStations', 'rooms.r2']),
+    );
     expect(workspace.previous.items[0]).toMatchObject({ title: 'Coverage completeness', response: 'fixed', responseNote: 'Attic added' });
     // Rooms changed, so coverage starts empty; processing did not, so it is offered again.
     expect(Object.keys(workspace.previous.carried)).toEqual(expect.arrayContaining(['processing', 'supplementary']));
@@ -176,11 +210,18 @@ describe('answering rework and resubmitting', () => {
   it('sends a disputed item to the managers, who withdraw or uphold it', async () => {
     const signed = await signedInAgent(app, 'technician');
     const { item, job } = await reworkRequested(signed.user.id);
-    await signed.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'disputed', note: 'The attic hatch is sealed by the insured' });
+    await signed.agent
+      .put(`/api/rework-items/${item.id}/response`)
+      .send({ response: 'disputed', note: 'The attic hatch is sealed by the insured' });
     const { agent: manager } = await signedInAgent(app, 'manager');
     const disputes = (await manager.get('/api/disputes')).body.disputes;
-    expect(disputes.find((d: { id: number }) => d.id === item.id)).toMatchObject({ claimReference: job.claimReference, responseNote: 'The attic hatch is sealed by the insured' });
-    const decided = await manager.put(`/api/rework-items/${item.id}/dispute-outcome`).send({ outcome: 'withdrawn', note: 'Sealed hatch: nothing to fix' });
+    expect(disputes.find((d: { id: number }) => d.id === item.id)).toMatchObject({
+      claimReference: job.claimReference,
+      responseNote: 'The attic hatch is sealed by the insured',
+    });
+    const decided = await manager
+      .put(`/api/rework-items/${item.id}/dispute-outcome`)
+      .send({ outcome: 'withdrawn', note: 'Sealed hatch: nothing to fix' });
     expect(decided.body.item.disputeOutcome).toBe('withdrawn');
     expect((await manager.get('/api/disputes')).body.disputes.find((d: { id: number }) => d.id === item.id)).toBeUndefined();
     expect((await manager.put(`/api/rework-items/${item.id}/dispute-outcome`).send({ outcome: 'upheld', note: '' })).status).toBe(409);
@@ -188,7 +229,7 @@ describe('answering rework and resubmitting', () => {
 });
 
 describe('GET /api/jobs/:id/timeline', () => {
-  it('lists the job\'s events in order, for its technician but not another', async () => {
+  it("lists the job's events in order, for its technician but not another", async () => {
     const technician = await signedInAgent(app, 'technician');
     const { agent: manager } = await signedInAgent(app, 'manager');
     const created = await manager.post('/api/jobs').send(newJobBody(technician.user.id));

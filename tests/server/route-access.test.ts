@@ -2,18 +2,29 @@
 // 2xx where the role is allowed, 401 for anonymous, 403 for a role that is not.
 // A route missing from ROUTES fails the first test, so no route ships unchecked.
 import type { Express } from 'express';
+
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/models';
-import { ROLES, type Role } from '../../shared/roles';
-import { createUser, TEST_PASSWORD } from '../helpers/factories';
-import { clientAgent, resetSignInLimits, send, signedInAgent, type Agent, type Upload } from '../helpers/http';
-import { claimFor, createJob, createRevision, createStoredFile, createSubmittedJob, fullScores, newJobBody, reworkRequested, secondReviewByAnother } from '../helpers/factories';
-import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
-import { completeRecord } from '../helpers/records';
-import { PNG_1X1 } from '../helpers/sample-files';
-import { CaptureRevision, StoredFile } from '../../server/models';
 import { putObject } from '../../server/storage/s3';
+import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
+import { type Role, ROLES } from '../../shared/roles';
+import {
+  claimFor,
+  createJob,
+  createRevision,
+  createStoredFile,
+  createSubmittedJob,
+  createUser,
+  fullScores,
+  newJobBody,
+  reworkRequested,
+  secondReviewByAnother,
+  TEST_PASSWORD,
+} from '../helpers/factories';
+import { type Agent, clientAgent, resetSignInLimits, send, signedInAgent, type Upload } from '../helpers/http';
+import { completeRecord } from '../helpers/records';
 import { registeredRoutes } from '../helpers/route-walk';
+import { PNG_1X1 } from '../helpers/sample-files';
 
 type Who = 'anonymous' | Role;
 const EVERYONE: Who[] = ['anonymous', ...ROLES];
@@ -46,7 +57,12 @@ const ROUTES: Record<string, RouteCase> = {
   'POST /api/users': {
     allowed: ['admin'],
     prepare: async () => ({
-      body: { name: 'New Person', email: `new-${Date.now()}-${Math.random()}@example.test`.replace('0.', ''), role: 'reviewer', password: 'long-enough-password' },
+      body: {
+        name: 'New Person',
+        email: `new-${Date.now()}-${Math.random()}@example.test`.replace('0.', ''),
+        role: 'reviewer',
+        password: 'long-enough-password',
+      },
     }),
   },
   'PATCH /api/users/:id': {
@@ -105,7 +121,10 @@ const ROUTES: Record<string, RouteCase> = {
     },
   },
   'GET /api/queue': { allowed: ['reviewer', 'manager'] },
-  'POST /api/jobs/:id/claim': { allowed: ['reviewer'], prepare: async () => ({ path: `/api/jobs/${(await createSubmittedJob()).id}/claim` }) },
+  'POST /api/jobs/:id/claim': {
+    allowed: ['reviewer'],
+    prepare: async () => ({ path: `/api/jobs/${(await createSubmittedJob()).id}/claim` }),
+  },
   'DELETE /api/jobs/:id/claim': {
     allowed: ['reviewer', 'manager'],
     prepare: async (me) => {
@@ -121,7 +140,10 @@ const ROUTES: Record<string, RouteCase> = {
       return { body: { toReviewerId: to.id, jobIds: [job.id] } };
     },
   },
-  'GET /api/jobs/:id/workspace': { allowed: ['reviewer', 'manager'], prepare: async () => ({ path: `/api/jobs/${(await createSubmittedJob()).id}/workspace` }) },
+  'GET /api/jobs/:id/workspace': {
+    allowed: ['reviewer', 'manager'],
+    prepare: async () => ({ path: `/api/jobs/${(await createSubmittedJob()).id}/workspace` }),
+  },
   'POST /api/jobs/:id/reviews': {
     allowed: ['reviewer'],
     prepare: async (me) => {
@@ -147,7 +169,10 @@ const ROUTES: Record<string, RouteCase> = {
   'GET /api/rubrics': { allowed: ['reviewer', 'manager'] },
   'GET /api/rubrics/current': { allowed: ['reviewer', 'manager'] },
   'POST /api/rubrics': { allowed: ['manager'], prepare: async () => ({ body: DEFAULT_RUBRIC }) },
-  'GET /api/jobs/:id/rework-items': { allowed: [...ROLES], prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/rework-items` }) },
+  'GET /api/jobs/:id/rework-items': {
+    allowed: [...ROLES],
+    prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/rework-items` }),
+  },
   'PUT /api/rework-items/:id/response': {
     allowed: ['technician'],
     prepare: async (me) => {
@@ -170,14 +195,16 @@ const ROUTES: Record<string, RouteCase> = {
   'GET /api/trends/team': { allowed: ['manager'] },
   'GET /api/trends/reviewers': { allowed: ['manager'] },
   'GET /api/trends/calibration': { allowed: ['manager'] },
-  'GET /api/jobs/:id/station-analysis': { allowed: [...ROLES], prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/station-analysis` }) },
+  'GET /api/jobs/:id/station-analysis': {
+    allowed: [...ROLES],
+    prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/station-analysis` }),
+  },
 };
 
 // A job the signed-in technician owns (anyone else's job for the other roles).
 function jobFor(me: { id: number; role: Role } | null) {
   return createJob({ technicianId: me?.role === 'technician' ? me.id : undefined });
 }
-
 
 describe('API route access', () => {
   it('has an access rule for every registered route, and no rule for a route that is gone', () => {
@@ -201,7 +228,7 @@ describe('API route access', () => {
         const prepared = spec.prepare ? await spec.prepare(me) : {};
         const path = prepared.path ?? pattern;
         const res = await send(agent, method, path, prepared.body, prepared.upload);
-        if (expected === "2xx") {
+        if (expected === '2xx') {
           if (res.status < 200 || res.status >= 300) throw new Error(`expected 2xx, got ${res.status} ${JSON.stringify(res.body)}`);
         } else {
           expect(res.status).toBe(expected);

@@ -1,7 +1,7 @@
 import { createApp } from '../../server/app';
-import { sequelize, Session } from '../../server/models';
 import { SIGN_IN_FAILED } from '../../server/auth/passport';
 import { config } from '../../server/config';
+import { sequelize, Session } from '../../server/models';
 import { createUser, TEST_PASSWORD, uniqueEmail } from '../helpers/factories';
 import { clientAgent, resetSignInLimits } from '../helpers/http';
 
@@ -27,14 +27,18 @@ describe('POST /api/session', () => {
 
   it('accepts the e-mail in any case and with spaces around it', async () => {
     const user = await createUser();
-    const res = await clientAgent(app).post('/api/session').send({ email: `  ${user.email.toUpperCase()} `, password: TEST_PASSWORD });
+    const res = await clientAgent(app)
+      .post('/api/session')
+      .send({ email: `  ${user.email.toUpperCase()} `, password: TEST_PASSWORD });
     expect(res.status).toBe(200);
   });
 
   it('refuses a wrong password with the same message as an unknown e-mail', async () => {
     const user = await createUser();
     const wrong = await clientAgent(app).post('/api/session').send({ email: user.email, password: 'not-the-password' });
-    const unknown = await clientAgent(app).post('/api/session').send({ email: uniqueEmail('nobody'), password: 'whatever-it-is' });
+    const unknown = await clientAgent(app)
+      .post('/api/session')
+      .send({ email: uniqueEmail('nobody'), password: 'whatever-it-is' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body).toEqual(unknown.body);
@@ -68,7 +72,9 @@ describe('POST /api/session', () => {
   it('locks an account after repeated failures, even for the right password', async () => {
     const user = await createUser();
     for (let i = 0; i < config.signInLimits.failuresPerAccount; i++) {
-      const res = await clientAgent(app).post('/api/session').send({ email: user.email, password: `wrong-${i}` });
+      const res = await clientAgent(app)
+        .post('/api/session')
+        .send({ email: user.email, password: `wrong-${i}` });
       expect(res.status).toBe(401);
     }
     const blocked = await clientAgent(app).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
@@ -78,7 +84,9 @@ describe('POST /api/session', () => {
 
   it('limits failures per address across many accounts', async () => {
     for (let i = 0; i < config.signInLimits.failuresPerIp; i++) {
-      await clientAgent(app).post('/api/session').send({ email: uniqueEmail('guess'), password: 'guessing-pw' });
+      await clientAgent(app)
+        .post('/api/session')
+        .send({ email: uniqueEmail('guess'), password: 'guessing-pw' });
     }
     const user = await createUser();
     const blocked = await clientAgent(app).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });

@@ -10,23 +10,37 @@ afterAll(async () => {
 });
 
 // A hall walked every 5 ft, then one station 13 ft further on: one weak link (common-practice limit 6 ft).
-const CSV = ['station,level,x,y,unit,room,kind', '1,ground,0,0,ft,Kitchen,station', '2,ground,5,0,ft,Kitchen,station', '3,ground,10,0,ft,Kitchen,station', '4,ground,23,0,ft,Kitchen,station', '5,ground,3,3,ft,Kitchen,panorama'].join('\n');
-
+const CSV = [
+  'station,level,x,y,unit,room,kind',
+  '1,ground,0,0,ft,Kitchen,station',
+  '2,ground,5,0,ft,Kitchen,station',
+  '3,ground,10,0,ft,Kitchen,station',
+  '4,ground,23,0,ft,Kitchen,station',
+  '5,ground,3,3,ft,Kitchen,panorama',
+].join('\n');
 
 describe('station coordinate files', () => {
   it('refuses a file with bad rows, naming line and column, and stores nothing', async () => {
     const { agent, job } = await technicianWithJob(app);
     const before = await countRows('files');
     const bad = 'station,level,x,y,unit,room,kind\n1,ground,0,0,ft,,station\n1,ground,x,0,furlong,,station\n';
-    const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'station_coordinates').attach('file', Buffer.from(bad), 'stations.csv');
+    const res = await agent
+      .post(`/api/jobs/${job.id}/files`)
+      .field('kind', 'station_coordinates')
+      .attach('file', Buffer.from(bad), 'stations.csv');
     expect(res.status).toBe(400);
-    expect(res.body.error.fields.file).toBe('The station file has 3 problem(s): line 3, station: Duplicate station number 1 (first on line 2); line 3, x: Not a number: "x"; line 3, unit: Unknown unit "furlong" (use ft or m)');
+    expect(res.body.error.fields.file).toBe(
+      'The station file has 3 problem(s): line 3, station: Duplicate station number 1 (first on line 2); line 3, x: Not a number: "x"; line 3, unit: Unknown unit "furlong" (use ft or m)',
+    );
     expect(await countRows('files')).toBe(before);
   });
 
   it('analyses the working record before submit and stores the analysis with the revision', async () => {
     const { agent, job } = await technicianWithJob(app);
-    const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'station_coordinates').attach('file', Buffer.from(CSV), 'stations.csv');
+    const upload = await agent
+      .post(`/api/jobs/${job.id}/files`)
+      .field('kind', 'station_coordinates')
+      .attach('file', Buffer.from(CSV), 'stations.csv');
     expect(upload.status).toBe(201);
     await agent.put(`/api/jobs/${job.id}/record`).send(completeRecord());
 

@@ -2,7 +2,8 @@
 // other test's rows (and from earlier runs on the same database). Dates below are written as
 // January 2020 and shifted by whole weeks. Each expected value is worked out in the comments.
 import { createApp } from '../../server/app';
-import { Job, Review, ReviewScore, Rubric, SecondReview, sequelize } from '../../server/models';
+import type { Job } from '../../server/models';
+import { ReviewScore, Rubric, SecondReview, sequelize } from '../../server/models';
 import { createJob, createReview, createUser } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent } from '../helpers/http';
 
@@ -17,11 +18,22 @@ let reviewerB: { id: number; name: string };
 
 const at = (iso: string, hour = 12) => new Date(new Date(`${iso}T${String(hour).padStart(2, '0')}:00:00Z`).getTime() - SHIFT);
 
-async function review(job: Job, revision: number, decidedAt: Date, score: number, decision: 'accept' | 'rework' | 'recapture', extra: { minutes?: number; late?: boolean; reviewerId?: number; kind?: 'primary' | 'blind_second' } = {}) {
+async function review(
+  job: Job,
+  revision: number,
+  decidedAt: Date,
+  score: number,
+  decision: 'accept' | 'rework' | 'recapture',
+  extra: { minutes?: number; late?: boolean; reviewerId?: number; kind?: 'primary' | 'blind_second' } = {},
+) {
   const rubric = await Rubric.findOne({ order: [['version', 'ASC']] });
   return createReview(job, extra.reviewerId ?? reviewerA.id, decision, {
-    revisionNumber: revision, rubricId: rubric!.id, kind: extra.kind, score,
-    claimedAt: extra.minutes ? new Date(decidedAt.getTime() - extra.minutes * 60_000) : null, decidedAt,
+    revisionNumber: revision,
+    rubricId: rubric!.id,
+    kind: extra.kind,
+    score,
+    claimedAt: extra.minutes ? new Date(decidedAt.getTime() - extra.minutes * 60_000) : null,
+    decidedAt,
     dueAt: new Date(decidedAt.getTime() + (extra.late ? -3_600_000 : 3_600_000)),
   });
 }
@@ -55,13 +67,24 @@ beforeAll(async () => {
 
   // Two blind pairs, both first reviews accepted by A; B agrees once and not once.
   const other = await createUser({ role: 'technician' });
-  for (const [firstScore, secondScore, secondDecision, secondCoverage] of [[100, 95, 'accept', 4], [90, 70, 'rework', 3]] as const) {
+  for (const [firstScore, secondScore, secondDecision, secondCoverage] of [
+    [100, 95, 'accept', 4],
+    [90, 70, 'rework', 3],
+  ] as const) {
     const job = await createJob({ technicianId: other.id });
     const first = await review(job, 1, at('2020-01-09'), firstScore, 'accept', { reviewerId: reviewerA.id });
     const second = await review(job, 1, at('2020-01-10'), secondScore, secondDecision, { reviewerId: reviewerB.id, kind: 'blind_second' });
     await below(first.id, 'coverage', 4);
     await below(second.id, 'coverage', secondCoverage);
-    await SecondReview.create({ jobId: job.id, revisionNumber: 1, firstReviewId: first.id, firstReviewerId: reviewerA.id, secondReviewId: second.id, claimedById: null, claimExpiresAt: null });
+    await SecondReview.create({
+      jobId: job.id,
+      revisionNumber: 1,
+      firstReviewId: first.id,
+      firstReviewerId: reviewerA.id,
+      secondReviewId: second.id,
+      claimedById: null,
+      claimExpiresAt: null,
+    });
   }
 });
 
@@ -71,7 +94,7 @@ afterAll(async () => {
 });
 
 describe('GET /api/trends', () => {
-  it('aggregates one technician\'s reviews', async () => {
+  it("aggregates one technician's reviews", async () => {
     const { agent } = await signedInAgent(app, 'manager');
     const res = await agent.get(`/api/trends?${PERIOD}&technicianId=${technicianId}`);
     expect(res.status).toBe(200);
@@ -97,7 +120,9 @@ describe('GET /api/trends', () => {
     expect(t.reworkChart.rows[0].ucl).toBeCloseTo(0.9633, 4);
     expect(t.reworkChart.rows[0].lcl).toBe(0);
     // Below full marks: spacing twice, coverage once, registration once.
-    expect(t.paretoCriteria.map((b: { label: string; count: number; cumulativeShare: number }) => [b.label, b.count, b.cumulativeShare])).toEqual([
+    expect(
+      t.paretoCriteria.map((b: { label: string; count: number; cumulativeShare: number }) => [b.label, b.count, b.cumulativeShare]),
+    ).toEqual([
       ['Station spacing and doorway line of sight', 2, 0.5],
       ['Coverage completeness', 1, 0.75],
       ['Registration integrity', 1, 1],
@@ -105,7 +130,7 @@ describe('GET /api/trends', () => {
     expect(t.paretoReasons).toEqual([{ label: 'No doorway station', count: 2, cumulativeShare: 1 }]);
   });
 
-  it('gives a technician their own trends and refuses anyone else\'s', async () => {
+  it("gives a technician their own trends and refuses anyone else's", async () => {
     const { agent, user } = await signedInAgent(app, 'technician');
     const own = await agent.get(`/api/trends?${PERIOD}`);
     expect(own.status).toBe(200);
@@ -119,7 +144,9 @@ describe('GET /api/trends', () => {
     const { agent } = await signedInAgent(app, 'manager');
     const res = await agent.get(`/api/trends?${PERIOD}&technicianId=${technicianId}&format=csv`);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
-    expect(res.text.split('\r\n')[0]).toBe('week_starting,reviews,mean_score,rework,rework_rate_pct,lower_limit_pct,upper_limit_pct,outside_limits');
+    expect(res.text.split('\r\n')[0]).toBe(
+      'week_starting,reviews,mean_score,rework,rework_rate_pct,lower_limit_pct,upper_limit_pct,outside_limits',
+    );
     expect(res.text).toContain(`${day('2020-01-06')},4,85.0,2,50.0,0.0,96.3,`);
   });
 

@@ -43,7 +43,9 @@ describe('POST /api/users', () => {
     const { agent } = await signedInAgent(app, 'admin');
     const existing = await createUser();
     const before = await countRows('users');
-    const res = await agent.post('/api/users').send({ name: 'Twin', email: existing.email, role: 'technician', password: 'a-long-password' });
+    const res = await agent
+      .post('/api/users')
+      .send({ name: 'Twin', email: existing.email, role: 'technician', password: 'a-long-password' });
     expect(res.status).toBe(409);
     expect(res.body.error.fields).toEqual({ email: 'Already in use' });
     expect(await countRows('users')).toBe(before);
@@ -59,7 +61,7 @@ describe('PATCH /api/users/:id', () => {
     expect((await User.findByPk(user.id))!.role).toBe('manager');
   });
 
-  it('deactivating ends the user\'s sessions and blocks sign-in', async () => {
+  it("deactivating ends the user's sessions and blocks sign-in", async () => {
     const { agent: admin } = await signedInAgent(app, 'admin');
     const user = await createUser();
     const userAgent = clientAgent(app);

@@ -7,6 +7,11 @@ describe('default rubric', () => {
   });
 
   it('marks coverage, registration, damage and processing as critical', () => {
-    expect(DEFAULT_RUBRIC.criteria.filter((c) => c.critical).map((c) => c.key)).toEqual(['coverage', 'registration', 'damage', 'processing']);
+    expect(DEFAULT_RUBRIC.criteria.filter((c) => c.critical).map((c) => c.key)).toEqual([
+      'coverage',
+      'registration',
+      'damage',
+      'processing',
+    ]);
   });
 });

@@ -9,7 +9,7 @@ describe('role navigation', () => {
     expect(homeFor('admin')).toBe('/admin/users');
   });
 
-  it('lists each role\'s home in its menu', () => {
+  it("lists each role's home in its menu", () => {
     for (const role of ROLES) expect(canOpen(role, homeFor(role))).toBe(true);
   });
 

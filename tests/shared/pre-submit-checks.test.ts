@@ -1,8 +1,8 @@
 import { emptyCaptureRecord } from '../../shared/capture-record';
-import { completeRecord, room } from '../helpers/records';
 import { checkCaptureRecord } from '../../shared/pre-submit-checks';
 import { expectedStations, MAX_STATION_SPACING_M } from '../../shared/station-spacing';
 import { feetToMetres, squareFeetToSquareMetres } from '../../shared/units';
+import { completeRecord, room } from '../helpers/records';
 
 describe('expected stations per room (common practice spacing, no published source)', () => {
   // Common practice: about 6 ft between stations for a tripod depth camera, 5 ft for a 360 camera.
@@ -30,13 +30,17 @@ describe('checkCaptureRecord', () => {
   });
 
   it('blocks an empty record on every required fact', () => {
-    const fields = checkCaptureRecord(emptyCaptureRecord()).missing.map((f) => f.field).sort();
+    const fields = checkCaptureRecord(emptyCaptureRecord())
+      .missing.map((f) => f.field)
+      .sort();
     expect(fields).toEqual(['cameraClass', 'glazingFlagged', 'levels', 'models', 'processing.confirmed', 'rooms', 'totalStations']);
   });
 
   it('blocks a total that is not rooms plus exterior', () => {
     const result = checkCaptureRecord(completeRecord({ totalStations: 7, exteriorStations: 1 }));
-    expect(result.missing).toEqual([{ field: 'totalStations', message: 'Total stations (7) must equal stations in rooms plus exterior (6).' }]);
+    expect(result.missing).toEqual([
+      { field: 'totalStations', message: 'Total stations (7) must equal stations in rooms plus exterior (6).' },
+    ]);
   });
 
   it('blocks until processing is confirmed', () => {
@@ -45,7 +49,11 @@ describe('checkCaptureRecord', () => {
   });
 
   it('warns, without blocking, when a room has fewer stations than its area suggests', () => {
-    const record = completeRecord({ rooms: [room({ lengthM: feetToMetres(12), widthM: feetToMetres(15), stations: 3 })], totalStations: 3, levels: [{ level: 'ground', stations: 3 }] });
+    const record = completeRecord({
+      rooms: [room({ lengthM: feetToMetres(12), widthM: feetToMetres(15), stations: 3 })],
+      totalStations: 3,
+      levels: [{ level: 'ground', stations: 3 }],
+    });
     const result = checkCaptureRecord(record);
     expect(result.missing).toEqual([]);
     expect(result.warnings).toHaveLength(1);
@@ -54,14 +62,27 @@ describe('checkCaptureRecord', () => {
   });
 
   it('states the room size in the unit the technician chose', () => {
-    const record = completeRecord({ units: 'm', rooms: [room({ areaM2: 20, stations: 1 })], totalStations: 1, levels: [{ level: 'ground', stations: 1 }] });
+    const record = completeRecord({
+      units: 'm',
+      rooms: [room({ areaM2: 20, stations: 1 })],
+      totalStations: 1,
+      levels: [{ level: 'ground', stations: 1 }],
+    });
     // 20 m² / 1.8288² m² = 5.98 → 6 stations.
     expect(checkCaptureRecord(record).warnings[0].message).toContain('about 20 m²; about 6 expected at 1.8 m spacing');
   });
 
   it('warns about a missing doorway station, unflagged reflective surfaces, open gaps and unseen damage', () => {
     const record = completeRecord({
-      rooms: [room({ lengthM: feetToMetres(12), widthM: feetToMetres(15), stations: 5, doorwayStation: false, reflective: [{ kind: 'mirror', found: 2, flagged: 1 }] })],
+      rooms: [
+        room({
+          lengthM: feetToMetres(12),
+          widthM: feetToMetres(15),
+          stations: 5,
+          doorwayStation: false,
+          reflective: [{ kind: 'mirror', found: 2, flagged: 1 }],
+        }),
+      ],
       gaps: [{ key: 'g1', location: 'Sunroom west wall', cause: 'direct_sun', resolved: false, note: '' }],
       damageAreas: [{ key: 'd1', roomKey: 'r1', description: 'Ceiling stain', lossType: 'water', stationNumbers: [], photoFileIds: [] }],
     });
@@ -70,9 +91,13 @@ describe('checkCaptureRecord', () => {
   });
 
   it('warns about a detached structure with neither a model nor a reason', () => {
-    const record = completeRecord({ detachedStructures: [{ key: 's1', name: 'Garden shed', structure: 'shed', modelKey: null, noModelReason: '' }] });
+    const record = completeRecord({
+      detachedStructures: [{ key: 's1', name: 'Garden shed', structure: 'shed', modelKey: null, noModelReason: '' }],
+    });
     expect(checkCaptureRecord(record).warnings.map((w) => w.message)).toEqual(['Garden shed: no model and no reason given.']);
-    const explained = completeRecord({ detachedStructures: [{ key: 's1', name: 'Garden shed', structure: 'shed', modelKey: null, noModelReason: 'Locked, no key' }] });
+    const explained = completeRecord({
+      detachedStructures: [{ key: 's1', name: 'Garden shed', structure: 'shed', modelKey: null, noModelReason: 'Locked, no key' }],
+    });
     expect(checkCaptureRecord(explained).warnings).toEqual([]);
   });
 
@@ -86,7 +111,7 @@ describe('checkCaptureRecord', () => {
     expect(checkCaptureRecord(record).missing.map((f) => f.field)).toEqual(['models.1.splitReason']);
   });
 
-  it('warns when a level\'s station count differs from its rooms', () => {
+  it("warns when a level's station count differs from its rooms", () => {
     const record = completeRecord({ levels: [{ level: 'ground', stations: 9 }] });
     expect(checkCaptureRecord(record).warnings.map((w) => w.field)).toEqual(['levels.ground']);
   });

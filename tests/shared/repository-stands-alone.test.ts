@@ -9,7 +9,9 @@ const upward = /((?:\.\.\/)+)[\w.-]+/g;
 
 function trackedSourceFiles(): string[] {
   const out = execFileSync('git', ['ls-files'], { cwd: root, encoding: 'utf8' });
-  return out.split('\n').filter((file) => file && !file.endsWith('.md') && !file.endsWith('package-lock.json') && !file.startsWith('assets/'));
+  return out
+    .split('\n')
+    .filter((file) => file && !file.endsWith('.md') && !file.endsWith('package-lock.json') && !file.startsWith('assets/'));
 }
 
 function escapes(file: string): string[] {

@@ -1,11 +1,20 @@
-import fc from 'fast-check';
+import * as fc from 'fast-check';
+
 import type { Criterion, RubricDefinition } from '../../shared/rubric';
-import { evaluate, weightedScore, type ScoreSheet } from '../../shared/scoring';
+import { evaluate, type ScoreSheet, weightedScore } from '../../shared/scoring';
 
 const levels: Criterion['scale'] = { kind: 'levels', levels: ['None', 'Poor', 'Fair', 'Good', 'Full'] };
 const passFail: Criterion['scale'] = { kind: 'pass_fail' };
 const criterion = (key: string, weight: number, extra: Partial<Criterion> = {}): Criterion => ({
-  key, title: key, guidance: '', weight, scale: levels, critical: false, appliesWhen: 'always', stockReasons: [], ...extra,
+  key,
+  title: key,
+  guidance: '',
+  weight,
+  scale: levels,
+  critical: false,
+  appliesWhen: 'always',
+  stockReasons: [],
+  ...extra,
 });
 
 describe('weightedScore (worked by hand)', () => {
@@ -49,15 +58,22 @@ describe('evaluate', () => {
   it('fails below the pass mark and says so', () => {
     // 100 × (40×1 + 60×0.5) / 100 = 70.0
     expect(evaluate(rubric, { coverage: 4, spacing: 2 })).toMatchObject({
-      score: 70, passed: false, failedRules: ['Score 70.0 is below the pass mark of 85.'],
+      score: 70,
+      passed: false,
+      failedRules: ['Score 70.0 is below the pass mark of 85.'],
     });
   });
 
   it('fails on a critical criterion at its lowest level whatever the total', () => {
-    const high: RubricDefinition = { passMark: 50, criteria: [criterion('coverage', 5, { critical: true, title: 'Coverage' }), criterion('spacing', 95)] };
+    const high: RubricDefinition = {
+      passMark: 50,
+      criteria: [criterion('coverage', 5, { critical: true, title: 'Coverage' }), criterion('spacing', 95)],
+    };
     // 100 × (0 + 95) / 100 = 95.0, above 50, but Coverage is 0 and critical.
     expect(evaluate(high, { coverage: 0, spacing: 4 })).toMatchObject({
-      score: 95, passed: false, failedRules: ['Critical criterion "Coverage" is at its lowest level.'],
+      score: 95,
+      passed: false,
+      failedRules: ['Critical criterion "Coverage" is at its lowest level.'],
     });
   });
 
@@ -68,35 +84,50 @@ describe('evaluate', () => {
 
 describe('weightedScore properties (fast-check)', () => {
   const sheetArb = fc
-    .array(fc.record({ weight: fc.integer({ min: 1, max: 100 }), passFail: fc.boolean(), score: fc.option(fc.integer({ min: 0, max: 4 }), { nil: null }) }), { minLength: 1, maxLength: 12 })
+    .array(
+      fc.record({
+        weight: fc.integer({ min: 1, max: 100 }),
+        passFail: fc.boolean(),
+        score: fc.option(fc.integer({ min: 0, max: 4 }), { nil: null }),
+      }),
+      { minLength: 1, maxLength: 12 },
+    )
     .map((rows) => {
       const criteria = rows.map((r, i) => criterion(`k${i}`, r.weight, { scale: r.passFail ? passFail : levels }));
-      const sheet: ScoreSheet = Object.fromEntries(rows.map((r, i) => [`k${i}`, r.score === null ? null : r.passFail ? Math.min(r.score, 1) : r.score]));
+      const sheet: ScoreSheet = Object.fromEntries(
+        rows.map((r, i) => [`k${i}`, r.score === null ? null : r.passFail ? Math.min(r.score, 1) : r.score]),
+      );
       return { criteria, sheet };
     });
 
   it('stays within 0–100', () => {
-    fc.assert(fc.property(sheetArb, ({ criteria, sheet }) => {
-      const score = weightedScore(criteria, sheet);
-      return score === null || (score >= 0 && score <= 100);
-    }));
+    fc.assert(
+      fc.property(sheetArb, ({ criteria, sheet }) => {
+        const score = weightedScore(criteria, sheet);
+        return score === null || (score >= 0 && score <= 100);
+      }),
+    );
   });
 
   it('does not change when every weight is scaled by the same constant', () => {
-    fc.assert(fc.property(sheetArb, fc.integer({ min: 2, max: 50 }), ({ criteria, sheet }, k) => {
-      const scaled = criteria.map((c) => ({ ...c, weight: c.weight * k }));
-      return weightedScore(scaled, sheet) === weightedScore(criteria, sheet);
-    }));
+    fc.assert(
+      fc.property(sheetArb, fc.integer({ min: 2, max: 50 }), ({ criteria, sheet }, k) => {
+        const scaled = criteria.map((c) => ({ ...c, weight: c.weight * k }));
+        return weightedScore(scaled, sheet) === weightedScore(criteria, sheet);
+      }),
+    );
   });
 
-  it('never goes down when one criterion\'s score goes up', () => {
-    fc.assert(fc.property(sheetArb, fc.nat(), ({ criteria, sheet }, pick) => {
-      const c = criteria[pick % criteria.length];
-      const current = sheet[c.key];
-      const max = c.scale.kind === 'levels' ? 4 : 1;
-      if (current === null || current === undefined || current >= max) return true;
-      const raised = { ...sheet, [c.key]: current + 1 };
-      return (weightedScore(criteria, raised) ?? 0) >= (weightedScore(criteria, sheet) ?? 0);
-    }));
+  it("never goes down when one criterion's score goes up", () => {
+    fc.assert(
+      fc.property(sheetArb, fc.nat(), ({ criteria, sheet }, pick) => {
+        const c = criteria[pick % criteria.length];
+        const current = sheet[c.key];
+        const max = c.scale.kind === 'levels' ? 4 : 1;
+        if (current === null || current === undefined || current >= max) return true;
+        const raised = { ...sheet, [c.key]: current + 1 };
+        return (weightedScore(criteria, raised) ?? 0) >= (weightedScore(criteria, sheet) ?? 0);
+      }),
+    );
   });
 });

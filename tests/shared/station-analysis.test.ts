@@ -1,8 +1,23 @@
-import { analyseLevel, analyseStations, clarkEvans, nearestNeighbours, registrationChain, suggestedComments } from '../../shared/station-analysis';
+import {
+  analyseLevel,
+  analyseStations,
+  clarkEvans,
+  nearestNeighbours,
+  registrationChain,
+  suggestedComments,
+} from '../../shared/station-analysis';
 import type { StationPoint } from '../../shared/station-file';
 import { MAX_STATION_SPACING_M } from '../../shared/station-spacing';
 
-const at = (number: number, x: number, y: number, extra: Partial<StationPoint> = {}): StationPoint => ({ number, level: 'ground', x, y, room: null, kind: 'station', ...extra });
+const at = (number: number, x: number, y: number, extra: Partial<StationPoint> = {}): StationPoint => ({
+  number,
+  level: 'ground',
+  x,
+  y,
+  room: null,
+  kind: 'station',
+  ...extra,
+});
 // Common practice, no published source: about 6 ft (1.8288 m) for a tripod depth camera.
 const TRIPOD = MAX_STATION_SPACING_M.tripod_depth!;
 
@@ -15,7 +30,11 @@ describe('nearest neighbours and the registration chain (worked by hand)', () =>
       { station: 3, neighbour: 1, distance: 4 },
     ]);
     // Station 3's earlier stations: #1 at 4 m, #2 at 5 m (the hypotenuse) → links to #1.
-    expect(registrationChain(pts, null).map((c) => [c.station, c.from, c.distance])).toEqual([[1, null, null], [2, 1, 3], [3, 1, 4]]);
+    expect(registrationChain(pts, null).map((c) => [c.station, c.from, c.distance])).toEqual([
+      [1, null, null],
+      [2, 1, 3],
+      [3, 1, 4],
+    ]);
   });
 
   it('a regular 4 × 4 grid at 1.5 m: every nearest neighbour is 1.5 m and nothing is sparse', () => {
@@ -38,7 +57,11 @@ describe('nearest neighbours and the registration chain (worked by hand)', () =>
 
   it('uses the later station when the earlier ones are all far', () => {
     const chain = registrationChain([at(1, 0, 0), at(2, 20, 0), at(3, 1, 0)], TRIPOD);
-    expect(chain.map((c) => [c.station, c.from, c.weak])).toEqual([[1, null, false], [2, 1, true], [3, 1, false]]);
+    expect(chain.map((c) => [c.station, c.from, c.weak])).toEqual([
+      [1, null, false],
+      [2, 1, true],
+      [3, 1, false],
+    ]);
   });
 });
 
@@ -76,16 +99,20 @@ describe('analyseStations', () => {
     // Kitchen 16.72 m² (180 ft²) at 1.8288 m spacing: 5 expected (common practice), 2 present.
     const analysis = analyseStations(pts, { maxSpacingM: TRIPOD, rooms: [{ name: 'kitchen', areaM2: 16.7225472 }] });
     expect(analysis.levels.map((l) => l.level)).toEqual(['ground', 'upper']);
-    expect(analysis.levels[0].rooms).toEqual([{ room: 'Kitchen', stations: 2, areaM2: 16.7225472, perTenSquareMetres: (2 / 16.7225472) * 10, expected: 5, short: true }]);
+    expect(analysis.levels[0].rooms).toEqual([
+      { room: 'Kitchen', stations: 2, areaM2: 16.7225472, perTenSquareMetres: (2 / 16.7225472) * 10, expected: 5, short: true },
+    ]);
     const suggestions = suggestedComments(analysis, 'ft', (l) => (l === 'ground' ? 'Ground floor' : 'Upper floor'));
     expect(suggestions.spacing).toEqual(['Ground floor, Kitchen: 2 station(s) where about 5 are expected for its area.']);
   });
 
-  it('words the weak links for the reviewer in the record\'s unit', () => {
+  it("words the weak links for the reviewer in the record's unit", () => {
     const pts = [0, 1.5, 5.5].map((x, i) => at(i + 1, x, 0));
     const suggestions = suggestedComments(analyseStations(pts, { maxSpacingM: TRIPOD }), 'ft', () => 'Ground floor');
     // 4 m = 13.1 ft (÷ 0.3048, NIST SP 811).
-    expect(suggestions.registration).toEqual(['Ground floor: station #3 is 13.1 ft from the nearest earlier station (#2); check that it registered in the right place.']);
+    expect(suggestions.registration).toEqual([
+      'Ground floor: station #3 is 13.1 ft from the nearest earlier station (#2); check that it registered in the right place.',
+    ]);
     expect(suggestions.spacing).toEqual(['Ground floor: station #3 is more than 6.0 ft from the nearest station.']);
   });
 });

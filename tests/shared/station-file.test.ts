@@ -2,7 +2,9 @@ import { parseStationFile } from '../../shared/station-file';
 
 describe('parseStationFile', () => {
   it('reads stations and converts feet to metres exactly (1 ft = 0.3048 m, NIST SP 811)', () => {
-    const { stations, problems } = parseStationFile('station,level,x,y,unit,room,kind\n1,ground,0,0,ft,Kitchen,station\n2,ground,6,10,ft,Kitchen,station\n3,upper,1.5,2,m,,panorama\n');
+    const { stations, problems } = parseStationFile(
+      'station,level,x,y,unit,room,kind\n1,ground,0,0,ft,Kitchen,station\n2,ground,6,10,ft,Kitchen,station\n3,upper,1.5,2,m,,panorama\n',
+    );
     expect(problems).toEqual([]);
     expect(stations[1]).toMatchObject({ number: 2, level: 'ground', room: 'Kitchen', kind: 'station' });
     // Floating point: 6 × 0.3048 is 1.8288 to within one unit in the last place.
@@ -34,6 +36,8 @@ describe('parseStationFile', () => {
   });
 
   it('reports a missing column on the header line', () => {
-    expect(parseStationFile('station,level,x,unit,kind\n1,ground,0,ft,station\n').problems).toEqual([{ line: 1, column: 'y', message: 'The header has no "y" column' }]);
+    expect(parseStationFile('station,level,x,unit,kind\n1,ground,0,ft,station\n').problems).toEqual([
+      { line: 1, column: 'y', message: 'The header has no "y" column' },
+    ]);
   });
 });

@@ -1,5 +1,5 @@
-import strdFile from '../fixtures/nist-strd-univariate.json';
 import { cohenKappa, landisKoch, mean, pChart, sampleSd, wilsonInterval, Z_95 } from '../../shared/statistics';
+import strdFile from '../fixtures/nist-strd-univariate.json';
 
 type Strd = { certified: Record<string, { mean: number; sd: number }>; data: Record<string, number[]> };
 const strd = strdFile as unknown as Strd;
@@ -48,8 +48,12 @@ describe('p-chart limits', () => {
     expect(rows[0].lcl).toBeCloseTo(0.0524, 3);
   });
 
-  it('computes limits per point from that point\'s n and calls out points outside them', () => {
-    const { rows } = pChart([{ label: 'a', n: 10, defects: 1 }, { label: 'b', n: 40, defects: 4 }, { label: 'c', n: 10, defects: 9 }]);
+  it("computes limits per point from that point's n and calls out points outside them", () => {
+    const { rows } = pChart([
+      { label: 'a', n: 10, defects: 1 },
+      { label: 'b', n: 40, defects: 4 },
+      { label: 'c', n: 10, defects: 9 },
+    ]);
     // p̄ = 14 / 60; with n = 10 the band is wider than with n = 40.
     expect(rows[0].ucl - rows[0].lcl).toBeGreaterThan(rows[1].ucl - rows[1].lcl);
     expect(rows.map((r) => r.outside)).toEqual([null, null, 'above']);
@@ -59,7 +63,10 @@ describe('p-chart limits', () => {
 describe("Cohen's kappa", () => {
   it('2×2 textbook example: p_o 0.70, p_e 0.50, κ 0.40', () => {
     // Source: widely reproduced example (Wikipedia "Cohen's kappa"); verified in REFERENCES.md.
-    const k = cohenKappa([[20, 5], [10, 15]])!;
+    const k = cohenKappa([
+      [20, 5],
+      [10, 15],
+    ])!;
     expect(k.observed).toBeCloseTo(0.7, 10);
     expect(k.expected).toBeCloseTo(0.5, 10);
     expect(k.kappa).toBeCloseTo(0.4, 10);
@@ -67,26 +74,51 @@ describe("Cohen's kappa", () => {
 
   it('Cohen (1968) 3×3 proportions: κ 0.4915, weighted κ 0.3478 with his disagreement weights', () => {
     // Source: Cohen (1968) Psychol. Bull. 70:213–220.
-    const table = [[0.44, 0.07, 0.09], [0.05, 0.2, 0.05], [0.01, 0.03, 0.06]];
+    const table = [
+      [0.44, 0.07, 0.09],
+      [0.05, 0.2, 0.05],
+      [0.01, 0.03, 0.06],
+    ];
     expect(cohenKappa(table)!.kappa).toBeCloseTo(0.4915, 4);
-    expect(cohenKappa(table, [[0, 1, 3], [1, 0, 6], [3, 6, 0]])!.kappa).toBeCloseTo(0.3478, 4);
+    expect(
+      cohenKappa(table, [
+        [0, 1, 3],
+        [1, 0, 6],
+        [3, 6, 0],
+      ])!.kappa,
+    ).toBeCloseTo(0.3478, 4);
   });
 
   it('linear and quadratic weights: 0.9315, 0.9412, 0.9541', () => {
     // Source: scikit-learn cohen_kappa_score test values; Artstein & Poesio (2008).
-    const table = [[46, 0, 0], [4, 40, 0], [0, 0, 10]];
+    const table = [
+      [46, 0, 0],
+      [4, 40, 0],
+      [0, 0, 10],
+    ];
     expect(cohenKappa(table)!.kappa).toBeCloseTo(0.9315, 4);
     expect(cohenKappa(table, 'linear')!.kappa).toBeCloseTo(0.9412, 4);
     expect(cohenKappa(table, 'quadratic')!.kappa).toBeCloseTo(0.9541, 4);
   });
 
   it('SAS example quoted in statsmodels: κ 0.4842, linear κw 0.4701', () => {
-    const table = [[0, 4, 1], [0, 8, 0], [0, 1, 5]];
+    const table = [
+      [0, 4, 1],
+      [0, 8, 0],
+      [0, 1, 5],
+    ];
     expect(cohenKappa(table)!.kappa).toBeCloseTo(0.4842, 4);
     expect(cohenKappa(table, 'linear')!.kappa).toBeCloseTo(0.4701, 4);
   });
 
   it('names the Landis & Koch (1977) bands', () => {
-    expect([-0.1, 0.1, 0.3, 0.5, 0.7, 0.9].map(landisKoch)).toEqual(['Poor', 'Slight', 'Fair', 'Moderate', 'Substantial', 'Almost perfect']);
+    expect([-0.1, 0.1, 0.3, 0.5, 0.7, 0.9].map(landisKoch)).toEqual([
+      'Poor',
+      'Slight',
+      'Fair',
+      'Moderate',
+      'Substantial',
+      'Almost perfect',
+    ]);
   });
 });

@@ -2,8 +2,9 @@ import { describeEvent } from '../../shared/timeline';
 
 describe('describeEvent', () => {
   it('puts a review decision in words', () => {
-    expect(describeEvent({ type: 'reviewed', data: { decision: 'rework', score: 78.5, rubricVersion: 2, revision: 1 } }))
-      .toBe('Reviewed: Request rework, score 78.5 (rubric version 2, revision 1)');
+    expect(describeEvent({ type: 'reviewed', data: { decision: 'rework', score: 78.5, rubricVersion: 2, revision: 1 } })).toBe(
+      'Reviewed: Request rework, score 78.5 (rubric version 2, revision 1)',
+    );
   });
 
   it('names the e-mail kinds', () => {

@@ -1,4 +1,4 @@
-import { feetToMetres, metresToFeet, squareFeetToSquareMetres, SQUARE_METRES_PER_SQUARE_FOOT, METRES_PER_FOOT } from '../../shared/units';
+import { feetToMetres, METRES_PER_FOOT, metresToFeet, SQUARE_METRES_PER_SQUARE_FOOT, squareFeetToSquareMetres } from '../../shared/units';
 
 // Source: NIST SP 811 (2008) App. B.8 and 24 FR 5348 (1959): the international foot is
 // exactly 0.3048 m and 1 ft² is exactly 0.09290304 m².

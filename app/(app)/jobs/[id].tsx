@@ -1,4 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
+
 import { JobScreen } from '@/components/jobs/job-screen';
 import { RequireRole } from '@/components/shell/require-role';
 

@@ -1,4 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
+
 import { ReviewScreen } from '@/components/review/review-screen';
 import { RequireRole } from '@/components/shell/require-role';
 

@@ -1,4 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
+
 import { RequireRole } from '@/components/shell/require-role';
 import { TechnicianTrendsPage } from '@/components/trends/technician-page';
 
