@@ -20,6 +20,7 @@ export type JobDetail = {
   job: JobSummary;
   record: CaptureRecord;
   recordVersion: number;
+  recordSavedAt: string | null;
   revisions: { number: number; submittedAt: string }[];
   files: StoredFile[];
 };

@@ -8,7 +8,9 @@ export function notFoundHandler(req: Request, _res: Response, next: NextFunction
 
 export function errorHandler(err: unknown, _req: Request, res: Response, _next: NextFunction) {
   if (err instanceof HttpError) {
-    res.status(err.status).json({ error: { code: err.code, message: err.message, ...(err.fields && { fields: err.fields }) } });
+    res
+      .status(err.status)
+      .json({ error: { code: err.code, message: err.message, ...(err.fields && { fields: err.fields }) }, ...err.extra });
     return;
   }
   const status = (err as { status?: number; type?: string }).status;

@@ -1,12 +1,13 @@
-import { Router } from 'express';
+import { type NextFunction, type Request, type Response, Router } from 'express';
 import { body, param, query } from 'express-validator';
 import multer from 'multer';
 
 import type { CaptureRecord } from '../../shared/capture-record';
-import { FILE_KINDS, type FileKind } from '../../shared/files';
+import { FILE_KINDS, type FileKind, fileTooLargeMessage } from '../../shared/files';
 import { JOB_STATUSES, type JobStatus } from '../../shared/jobs';
 import { config } from '../config';
 import { HttpError } from '../errors';
+import { requireBaseVersion } from '../middleware/base-version';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { getRevision, saveDraft, submitRecord } from '../services/capture-record-service';
@@ -53,12 +54,12 @@ jobsRouter.patch('/:id', jobManagers, validate(jobId, ...jobUpdateRules), async 
   res.json({ job: await updateJob(req.user!, Number(req.params.id), { technicianId, dueAt, priority, siteVisitDate }) });
 });
 
-jobsRouter.put('/:id/record', technicianOnly, validate(jobId, ...captureRecordRules), async (req, res) => {
-  res.json(await saveDraft(req.user!, Number(req.params.id), req.body as CaptureRecord));
+jobsRouter.put('/:id/record', technicianOnly, requireBaseVersion, validate(jobId, ...captureRecordRules), async (req, res) => {
+  res.json(await saveDraft(req.user!, Number(req.params.id), req.body as CaptureRecord, req.baseVersion!));
 });
 
-jobsRouter.post('/:id/submit', technicianOnly, validate(jobId, ...captureRecordRules), async (req, res) => {
-  res.status(201).json(await submitRecord(req.user!, Number(req.params.id), req.body as CaptureRecord));
+jobsRouter.post('/:id/submit', technicianOnly, requireBaseVersion, validate(jobId, ...captureRecordRules), async (req, res) => {
+  res.status(201).json(await submitRecord(req.user!, Number(req.params.id), req.body as CaptureRecord, req.baseVersion!));
 });
 
 jobsRouter.get(
@@ -79,16 +80,32 @@ const singleFile = (
 ) =>
   upload.single('file')(req, res, (err: unknown) => {
     if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
-      return next(
-        new HttpError(413, 'too_large', `Files may be at most ${config.uploadMaxBytes / 1024 / 1024} MB.`, { file: 'Too large' }),
-      );
+      return next(new HttpError(413, 'too_large', tooLargeMessage(), { file: tooLargeMessage() }));
     }
     next(err);
   });
 
+// Refused from the declared length before a byte of the body is read: a file that can never
+// pass is not uploaded in full first. Multipart framing adds a little, hence the allowance.
+const MULTIPART_ALLOWANCE = 64 * 1024;
+function refuseDeclaredOversize(req: Request, _res: Response, next: NextFunction) {
+  const declared = Number(req.get('Content-Length'));
+  if (Number.isFinite(declared) && declared > config.uploadMaxBytes + MULTIPART_ALLOWANCE) {
+    req.socket.setTimeout(5000);
+    next(new HttpError(413, 'too_large', tooLargeMessage(declared), { file: tooLargeMessage(declared) }));
+    return;
+  }
+  next();
+}
+
+function tooLargeMessage(bytes?: number) {
+  return fileTooLargeMessage(config.uploadMaxBytes, bytes);
+}
+
 jobsRouter.post(
   '/:id/files',
   technicianOnly,
+  refuseDeclaredOversize,
   singleFile,
   validate(
     jobId,

@@ -1,11 +1,11 @@
 import { Op, type Transaction } from 'sequelize';
 
 import type { RevisionView } from '../../shared/api-types';
-import type { CaptureRecord } from '../../shared/capture-record';
+import { type CaptureRecord, emptyCaptureRecord } from '../../shared/capture-record';
 import { resumeDueClock } from '../../shared/due-clock';
 import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
 import { checkCaptureRecord } from '../../shared/pre-submit-checks';
-import { conflict, invalid, notFound } from '../errors';
+import { conflict, invalid, notFound, staleVersion } from '../errors';
 import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models';
 import { recordEvent } from './audit-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
@@ -32,32 +32,46 @@ async function assertPhotosBelongToJob(jobId: number, record: CaptureRecord, tra
   }
 }
 
+export type DraftView = { record: CaptureRecord; version: number; savedAt: string | null };
+
+function draftView(draft: CaptureDraft | null): DraftView {
+  return draft
+    ? { record: draft.data, version: draft.version, savedAt: draft.updatedAt.toISOString() }
+    : { record: emptyCaptureRecord(), version: 0, savedAt: null };
+}
+
+// Writes the draft as the next version, but only when it is still the version the client based
+// its edits on; otherwise the client is shown both and chooses (409 with the current draft).
+async function writeDraft(jobId: number, record: CaptureRecord, baseVersion: number, transaction: Transaction) {
+  const draft = await CaptureDraft.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
+  if ((draft?.version ?? 0) !== baseVersion) throw staleVersion('This capture record', draftView(draft));
+  if (!draft) return CaptureDraft.create({ jobId, data: record }, { transaction });
+  draft.data = record;
+  draft.version += 1;
+  draft.changed('data', true);
+  return draft.save({ transaction });
+}
+
 // Autosave: accepts an incomplete record (required facts are checked at submit), but never
 // a malformed one (the route validates types, ranges and enums first).
-export async function saveDraft(actor: Actor, jobId: number, record: CaptureRecord) {
+export async function saveDraft(actor: Actor, jobId: number, record: CaptureRecord, baseVersion: number) {
   return sequelize.transaction(async (transaction) => {
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
     assertAssignedTechnician(actor, job);
     assertEditable(job.status);
-    const draft = await CaptureDraft.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (draft) {
-      draft.data = record;
-      draft.version += 1;
-      draft.changed('data', true);
-      await draft.save({ transaction });
-      return { version: draft.version, savedAt: draft.updatedAt.toISOString() };
-    }
-    const created = await CaptureDraft.create({ jobId, data: record }, { transaction });
-    return { version: created.version, savedAt: created.updatedAt.toISOString() };
+    const saved = await writeDraft(jobId, record, baseVersion, transaction);
+    return { version: saved.version, savedAt: saved.updatedAt.toISOString() };
   });
 }
 
 // Freezes the record as the next immutable revision and hands the job to review.
-export async function submitRecord(actor: Actor, jobId: number, record: CaptureRecord) {
+export async function submitRecord(actor: Actor, jobId: number, record: CaptureRecord, baseVersion: number) {
   return sequelize.transaction(async (transaction) => {
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
     assertAssignedTechnician(actor, job);
     assertEditable(job.status);
+    // The submitted record becomes the draft's next version too (rolled back with the rest).
+    const draft = await writeDraft(jobId, record, baseVersion, transaction);
 
     if (job.status === 'rework_requested') await assertReworkAnswered(jobId, transaction);
     const findings = checkCaptureRecord(record);
@@ -75,7 +89,6 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
       { jobId, number, data: record, files: files.map((f) => f.toView()), findings, stationAnalysis, submittedById: actor.id, submittedAt },
       { transaction },
     );
-    await CaptureDraft.upsert({ jobId, data: record }, { transaction });
     job.status = number === 1 ? 'submitted' : 'resubmitted';
     job.currentRevision = number;
     job.cameraClass = record.cameraClass;
@@ -83,7 +96,13 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     resumeDueClock(job, submittedAt);
     await job.save({ transaction });
     await recordEvent(transaction, jobId, actor.id, 'submitted', { revision: number, warnings: findings.warnings.length });
-    return { revision: number, status: job.status, submittedAt: submittedAt.toISOString(), warnings: findings.warnings };
+    return {
+      revision: number,
+      status: job.status,
+      submittedAt: submittedAt.toISOString(),
+      warnings: findings.warnings,
+      recordVersion: draft.version,
+    };
   });
 }
 

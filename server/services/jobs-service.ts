@@ -104,7 +104,8 @@ export async function updateJob(
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
     const { dueAt, ...rest } = changes;
     const previousTechnician = job.technicianId;
-    job.set(rest);
+    // Only the fields sent change: an absent field is undefined, never a null to write.
+    for (const [field, value] of Object.entries(rest)) if (value !== undefined) job.set(field as keyof typeof rest, value as never);
     if (dueAt !== undefined) {
       job.dueAt = new Date(dueAt);
       job.effectiveDueAt = effectiveDueAt(job.dueAt, job.pausedMs);
@@ -135,6 +136,7 @@ export async function getJobDetail(actor: Actor, jobId: number): Promise<JobDeta
     job: summary,
     record: draft?.data ?? emptyCaptureRecord(),
     recordVersion: draft?.version ?? 0,
+    recordSavedAt: draft ? draft.updatedAt.toISOString() : null,
     revisions: revisions.map((r) => ({ number: r.number, submittedAt: r.submittedAt.toISOString() })),
     files: files.map((f) => f.toView()),
   };

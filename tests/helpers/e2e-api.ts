@@ -27,18 +27,19 @@ export async function call<T = unknown>(
   method: 'get' | 'post' | 'put' | 'delete',
   path: string,
   data?: object,
+  headers: Record<string, string> = {},
 ): Promise<T> {
-  const res = await api[method](`${BASE_URL}${path}`, { headers: HEADERS, data });
+  const res = await api[method](`${BASE_URL}${path}`, { headers: { ...HEADERS, ...headers }, data });
   if (!res.ok()) throw new Error(`${method.toUpperCase()} ${path}: ${res.status()} ${await res.text()}`);
   return (res.status() === 204 ? undefined : await res.json()) as T;
 }
 
-// A job for a demo technician, created by the manager and submitted by the technician.
-export async function submittedJob(
+// A job for a demo technician, created by the manager, still a draft.
+export async function draftJob(
   api: APIRequestContext,
-  options: { technician: string; claimReference: string; dueInHours: number; record: CaptureRecord; lossType?: string },
+  options: { technician: string; claimReference: string; dueInHours: number; lossType?: string },
 ) {
-  const jobId = await as(api, 'mara.', async () => {
+  return as(api, 'mara.', async () => {
     const { technicians } = await call<{ technicians: { id: number; name: string }[] }>(api, 'get', '/api/technicians');
     const technician = technicians.find((t) => t.name === demoPerson(options.technician).name)!;
     const { job } = await call<{ job: { id: number } }>(api, 'post', '/api/jobs', {
@@ -56,6 +57,15 @@ export async function submittedJob(
     });
     return job.id;
   });
-  await as(api, options.technician, () => call(api, 'post', `/api/jobs/${jobId}/submit`, options.record));
+}
+
+// A job for a demo technician, created by the manager and submitted by the technician.
+export async function submittedJob(
+  api: APIRequestContext,
+  options: { technician: string; claimReference: string; dueInHours: number; record: CaptureRecord; lossType?: string },
+) {
+  const jobId = await draftJob(api, options);
+  // A new job starts with an empty draft at version 1: the submit is based on it.
+  await as(api, options.technician, () => call(api, 'post', `/api/jobs/${jobId}/submit`, options.record, { 'If-Match': '"1"' }));
   return jobId;
 }

@@ -35,8 +35,16 @@ export type Sent = { status: number; body: any; headers: Record<string, string> 
 // One call by method name, for the table-driven tests.
 export type Upload = { field: string; buffer: Buffer; filename: string; fields: Record<string, string> };
 
-export async function send(agent: Agent, method: string, path: string, body?: object, upload?: Upload): Promise<Sent> {
+export async function send(
+  agent: Agent,
+  method: string,
+  path: string,
+  body?: object,
+  upload?: Upload,
+  headers: Record<string, string> = {},
+): Promise<Sent> {
   const call = (agent as unknown as Record<string, (p: string) => request.Test>)[method.toLowerCase()](path);
+  for (const [name, value] of Object.entries(headers)) call.set(name, value);
   if (upload) {
     for (const [name, value] of Object.entries(upload.fields)) call.field(name, value);
     return call.attach(upload.field, upload.buffer, upload.filename) as unknown as Promise<Sent>;
@@ -49,4 +57,24 @@ export async function technicianWithJob(app: Express) {
   const { createJob } = await import('./factories');
   const signed = await signedInAgent(app, 'technician');
   return { ...signed, job: await createJob({ technicianId: signed.user.id }) };
+}
+
+// The draft version a job's record is at now, for the If-Match of a save or a submit.
+export async function recordVersionOf(agent: Agent, jobId: number): Promise<number> {
+  const res = await agent.get(`/api/jobs/${jobId}`);
+  return res.body.recordVersion ?? 0;
+}
+
+export async function saveRecordAs(agent: Agent, jobId: number, record: object) {
+  return agent
+    .put(`/api/jobs/${jobId}/record`)
+    .set('If-Match', `"${await recordVersionOf(agent, jobId)}"`)
+    .send(record);
+}
+
+export async function submitRecordAs(agent: Agent, jobId: number, record: object) {
+  return agent
+    .post(`/api/jobs/${jobId}/submit`)
+    .set('If-Match', `"${await recordVersionOf(agent, jobId)}"`)
+    .send(record);
 }

@@ -3,7 +3,7 @@ import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/app';
 import { CaptureRevision, Job, sequelize } from '../../server/models';
 import { feetToMetres } from '../../shared/units';
-import { countRows, resetSignInLimits, signedInAgent, technicianWithJob } from '../helpers/http';
+import { countRows, resetSignInLimits, saveRecordAs, signedInAgent, submitRecordAs, technicianWithJob } from '../helpers/http';
 import { completeRecord, room } from '../helpers/records';
 
 const app = createApp();
@@ -16,9 +16,9 @@ describe('PUT /api/jobs/:id/record', () => {
   it('autosaves an incomplete draft and returns it on the next load', async () => {
     const { agent, job } = await technicianWithJob(app);
     const draft = { ...completeRecord(), cameraClass: null, totalStations: null, processing: { confirmed: false, confirmedAt: null } };
-    const first = await agent.put(`/api/jobs/${job.id}/record`).send(draft);
+    const first = await saveRecordAs(agent, job.id, draft);
     expect(first.status).toBe(200);
-    const second = await agent.put(`/api/jobs/${job.id}/record`).send({ ...draft, notes: 'Back bedroom door was locked' });
+    const second = await saveRecordAs(agent, job.id, { ...draft, notes: 'Back bedroom door was locked' });
     expect(second.body.version).toBe(first.body.version + 1);
     const loaded = await agent.get(`/api/jobs/${job.id}`);
     expect(loaded.body.record.notes).toBe('Back bedroom door was locked');
@@ -28,13 +28,13 @@ describe('PUT /api/jobs/:id/record', () => {
   it('answers 404 when another technician tries to save', async () => {
     const { job } = await technicianWithJob(app);
     const { agent: other } = await signedInAgent(app, 'technician');
-    expect((await other.put(`/api/jobs/${job.id}/record`).send(completeRecord())).status).toBe(404);
+    expect((await saveRecordAs(other, job.id, completeRecord())).status).toBe(404);
   });
 
   it('refuses changes once the record is submitted', async () => {
     const { agent, job } = await technicianWithJob(app);
-    await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord());
-    const res = await agent.put(`/api/jobs/${job.id}/record`).send(completeRecord({ notes: 'late edit' }));
+    await submitRecordAs(agent, job.id, completeRecord());
+    const res = await saveRecordAs(agent, job.id, completeRecord({ notes: 'late edit' }));
     expect(res.status).toBe(409);
   });
 });
@@ -45,7 +45,7 @@ describe('POST /api/jobs/:id/submit', () => {
     const record = completeRecord({
       rooms: [room({ lengthM: feetToMetres(12), widthM: feetToMetres(15), stations: 5, doorwayStation: false })],
     });
-    const res = await agent.post(`/api/jobs/${job.id}/submit`).send(record);
+    const res = await submitRecordAs(agent, job.id, record);
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ revision: 1, status: 'submitted' });
     expect(res.body.warnings.map((w: { field: string }) => w.field)).toEqual(['rooms.0.doorwayStation']);
@@ -58,9 +58,11 @@ describe('POST /api/jobs/:id/submit', () => {
   it('refuses a record with missing facts, naming each field, and writes nothing', async () => {
     const { agent, job } = await technicianWithJob(app);
     const before = await countRows('capture_revisions');
-    const res = await agent
-      .post(`/api/jobs/${job.id}/submit`)
-      .send(completeRecord({ totalStations: 9, processing: { confirmed: false, confirmedAt: null } }));
+    const res = await submitRecordAs(
+      agent,
+      job.id,
+      completeRecord({ totalStations: 9, processing: { confirmed: false, confirmedAt: null } }),
+    );
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({
       'processing.confirmed': 'Confirm that processing started on the capture platform.',
@@ -75,18 +77,18 @@ describe('POST /api/jobs/:id/submit', () => {
     const record = completeRecord({
       damageAreas: [{ key: 'd1', roomKey: 'r1', description: 'Stain', lossType: 'water', stationNumbers: [2], photoFileIds: [987654] }],
     });
-    const res = await agent.post(`/api/jobs/${job.id}/submit`).send(record);
+    const res = await submitRecordAs(agent, job.id, record);
     expect(res.status).toBe(400);
     expect(res.body.error.fields).toEqual({ 'damageAreas.0.photoFileIds': 'A photo is not attached to this job' });
   });
 
   it('keeps revision 1 unchanged when the record is reworked and resubmitted as revision 2', async () => {
     const { agent, job } = await technicianWithJob(app);
-    await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ notes: 'first pass' }));
+    await submitRecordAs(agent, job.id, completeRecord({ notes: 'first pass' }));
     await Job.update({ status: 'rework_requested' }, { where: { id: job.id } });
 
-    await agent.put(`/api/jobs/${job.id}/record`).send(completeRecord({ notes: 'added attic stations' }));
-    const second = await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ notes: 'added attic stations' }));
+    await saveRecordAs(agent, job.id, completeRecord({ notes: 'added attic stations' }));
+    const second = await submitRecordAs(agent, job.id, completeRecord({ notes: 'added attic stations' }));
     expect(second.body).toMatchObject({ revision: 2, status: 'resubmitted' });
 
     const one = await agent.get(`/api/jobs/${job.id}/revisions/1`);
@@ -99,7 +101,7 @@ describe('POST /api/jobs/:id/submit', () => {
 
   it('cannot be rewritten in the database either: the table refuses updates', async () => {
     const { agent, job } = await technicianWithJob(app);
-    await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord({ notes: 'as captured' }));
+    await submitRecordAs(agent, job.id, completeRecord({ notes: 'as captured' }));
     await expect(
       sequelize.query('UPDATE capture_revisions SET data = ? WHERE job_id = ?', {
         replacements: [JSON.stringify(completeRecord({ notes: 'rewritten' })), job.id],
@@ -114,7 +116,7 @@ describe('POST /api/jobs/:id/submit', () => {
 describe('GET /api/jobs/:id/revisions/:number', () => {
   it('lets a reviewer read a submitted revision and answers 404 for one that does not exist', async () => {
     const { agent, job } = await technicianWithJob(app);
-    await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord());
+    await submitRecordAs(agent, job.id, completeRecord());
     const { agent: reviewer } = await signedInAgent(app, 'reviewer');
     expect((await reviewer.get(`/api/jobs/${job.id}/revisions/1`)).status).toBe(200);
     expect((await reviewer.get(`/api/jobs/${job.id}/revisions/2`)).status).toBe(404);

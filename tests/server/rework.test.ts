@@ -11,7 +11,7 @@ import { sendPendingEmails } from '../../server/services/outbox-service';
 import { queueOverdueReworkReminders } from '../../server/services/reminder-service';
 import { submitReview } from '../../server/services/review-service';
 import { claimFor, createSubmittedJob, createUser, fullScores, newJobBody, reworkRequested } from '../helpers/factories';
-import { resetSignInLimits, signedInAgent } from '../helpers/http';
+import { resetSignInLimits, signedInAgent, submitRecordAs } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
 
@@ -141,7 +141,7 @@ describe('answering rework and resubmitting', () => {
     await job.update({ pausedAt: new Date(Date.now() - 2 * 3_600_000) });
     const dueBefore = (await Job.findByPk(job.id))!.effectiveDueAt.getTime();
 
-    const blocked = await signed.agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord());
+    const blocked = await submitRecordAs(signed.agent, job.id, completeRecord());
     expect(blocked.status).toBe(400);
     expect(blocked.body.error.fields.rework).toMatch(/Answer every rework item first \(1 open: Coverage completeness\)/);
 
@@ -166,7 +166,7 @@ describe('answering rework and resubmitting', () => {
         { level: 'attic', stations: 4 },
       ],
     });
-    const resubmitted = await signed.agent.post(`/api/jobs/${job.id}/submit`).send(record);
+    const resubmitted = await submitRecordAs(signed.agent, job.id, record);
     expect(resubmitted.status).toBe(201);
     expect(resubmitted.body).toMatchObject({ revision: 2, status: 'resubmitted' });
     const after = (await Job.findByPk(job.id))!;
@@ -193,7 +193,7 @@ describe('answering rework and resubmitting', () => {
         { level: 'attic', stations: 1 },
       ],
     });
-    expect((await technician.agent.post(`/api/jobs/${job.id}/submit`).send(record)).status).toBe(201);
+    expect((await submitRecordAs(technician.agent, job.id, record)).status).toBe(201);
 
     await reviewer.agent.post(`/api/jobs/${job.id}/claim`);
     const workspace = (await reviewer.agent.get(`/api/jobs/${job.id}/workspace`)).body;
@@ -234,7 +234,7 @@ describe('GET /api/jobs/:id/timeline', () => {
     const { agent: manager } = await signedInAgent(app, 'manager');
     const created = await manager.post('/api/jobs').send(newJobBody(technician.user.id));
     const jobId = created.body.job.id;
-    await technician.agent.post(`/api/jobs/${jobId}/submit`).send(completeRecord());
+    await submitRecordAs(technician.agent, jobId, completeRecord());
     const events = (await technician.agent.get(`/api/jobs/${jobId}/timeline`)).body.events;
     expect(events.map((e: { type: string }) => e.type)).toEqual(['created', 'assigned', 'submitted']);
     expect(events[2]).toMatchObject({ actor: technician.user.name, data: { revision: 1 } });

@@ -1,6 +1,6 @@
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/models';
-import { countRows, resetSignInLimits, signedInAgent, technicianWithJob } from '../helpers/http';
+import { countRows, resetSignInLimits, saveRecordAs, signedInAgent, submitRecordAs, technicianWithJob } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
 
 const app = createApp();
@@ -42,7 +42,7 @@ describe('station coordinate files', () => {
       .field('kind', 'station_coordinates')
       .attach('file', Buffer.from(CSV), 'stations.csv');
     expect(upload.status).toBe(201);
-    await agent.put(`/api/jobs/${job.id}/record`).send(completeRecord());
+    await saveRecordAs(agent, job.id, completeRecord());
 
     const draft = await agent.get(`/api/jobs/${job.id}/station-analysis`);
     expect(draft.status).toBe(200);
@@ -55,7 +55,7 @@ describe('station coordinate files', () => {
     // Kitchen 12 × 15 ft = 180 ft² needs 5 stations at 6 ft (common practice); 4 registered.
     expect(level.rooms[0]).toMatchObject({ room: 'Kitchen', stations: 4, expected: 5, short: true });
 
-    await agent.post(`/api/jobs/${job.id}/submit`).send(completeRecord());
+    await submitRecordAs(agent, job.id, completeRecord());
     const stored = await agent.get(`/api/jobs/${job.id}/station-analysis?revision=1`);
     expect(stored.body.analysis.levels[0].weakLinks).toHaveLength(1);
     const { agent: reviewer } = await signedInAgent(app, 'reviewer');
