@@ -56,6 +56,10 @@ export type QueuePage = {
 
 export type ScoreInput = { key: string; score: number | null; stockReason: string | null; comment: string };
 
+// A reviewer's unsaved work on one claim: scores and comments so far, and the chosen decision.
+export type ReviewDraftData = { scores: ScoreInput[]; decision: Decision | null };
+export type ReviewDraft = ReviewDraftData & { version: number; savedAt: string; revision: number };
+
 export type Workspace = {
   job: QueueRow & { street: string; city: string };
   revision: {
@@ -71,6 +75,8 @@ export type Workspace = {
   claimExpiresAt: string | null;
   secondReviewId: number | null;
   secondClaimedByMe: boolean;
+  // The signed-in reviewer's own saved draft for this claim; never anyone else's.
+  draft: ReviewDraft | null;
   previous: {
     revision: number;
     score: number | null;

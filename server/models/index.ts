@@ -6,6 +6,7 @@ import { CaptureRevision } from './capture-revision';
 import { Job } from './job';
 import { OutboxMessage } from './outbox-message';
 import { Review } from './review';
+import { ReviewDraft } from './review-draft';
 import { ReviewScore } from './review-score';
 import { ReworkItem } from './rework-item';
 import { Rubric } from './rubric';
@@ -23,6 +24,7 @@ StoredFile.initModel(sequelize);
 Rubric.initModel(sequelize);
 Review.initModel(sequelize);
 ReviewScore.initModel(sequelize);
+ReviewDraft.initModel(sequelize);
 ReworkItem.initModel(sequelize);
 SecondReview.initModel(sequelize);
 AuditEvent.initModel(sequelize);
@@ -47,6 +49,7 @@ export {
   Job,
   OutboxMessage,
   Review,
+  ReviewDraft,
   ReviewScore,
   ReworkItem,
   Rubric,

@@ -1,12 +1,14 @@
 import { Router } from 'express';
 import { param, query } from 'express-validator';
 
+import { requireBaseVersion } from '../middleware/base-version';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { claimJob, reassignClaims, releaseClaim } from '../services/claims-service';
+import { saveReviewDraft } from '../services/review-draft-service';
 import { claimSecondReview, getWorkspace, listOpenSecondReviews, submitReview, submitSecondReview } from '../services/review-service';
 import { listActiveReviewers } from '../services/users-service';
-import { reassignRules, reviewRules } from '../validators/review';
+import { reassignRules, reviewDraftRules, reviewRules } from '../validators/review';
 
 // Mounted at /api: claims, the scoring workspace, decisions and blind second reviews.
 export const reviewsRouter = Router();
@@ -32,6 +34,19 @@ reviewsRouter.get(
   validate(jobId, query('second', 'Must be a second-review id').optional().isInt({ min: 1 }).toInt()),
   async (req, res) => {
     res.json(await getWorkspace(req.user!, Number(req.params.id), req.query.second ? Number(req.query.second) : null));
+  },
+);
+
+// The reviewer's unsaved scores for their claim (`?second=` for a blind second review).
+reviewsRouter.put(
+  '/jobs/:id/review-draft',
+  requireRole('reviewer'),
+  requireBaseVersion,
+  validate(jobId, query('second', 'Must be a second-review id').optional().isInt({ min: 1 }).toInt(), ...reviewDraftRules),
+  async (req, res) => {
+    const second = req.query.second ? Number(req.query.second) : null;
+    const data = { decision: req.body.decision ?? null, scores: req.body.scores };
+    res.json({ draft: await saveReviewDraft(req.user!, Number(req.params.id), second, data, req.baseVersion!) });
   },
 );
 

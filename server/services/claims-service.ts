@@ -6,6 +6,7 @@ import { conflict, HttpError, invalid, notFound } from '../errors';
 import { Job, sequelize, User } from '../models';
 import { recordEvent } from './audit-service';
 import { activeClaim } from './queue-service';
+import { dropReviewDraft } from './review-draft-service';
 
 type Actor = Express.User;
 
@@ -34,6 +35,7 @@ export async function claimJob(actor: Actor, jobId: number) {
       const holder = job.get('claimedBy') as User | null;
       throw new HttpError(409, 'already_claimed', `${holder?.name ?? 'Another reviewer'} has claimed this job.`);
     }
+    await dropReviewDraft(transaction, jobId, null, actor.id);
     await recordEvent(transaction, jobId, actor.id, 'claimed', { until: job.claimExpiresAt!.toISOString() });
     return { jobId, claimedBy: { id: actor.id, name: actor.name }, claimExpiresAt: job.claimExpiresAt!.toISOString() };
   });
@@ -76,6 +78,7 @@ export async function reassignClaims(actor: Actor, input: { toReviewerId: number
         { claimedById: target.id, claimedAt: now, claimExpiresAt: claimExpiresAt(now, config.review.claimMinutes), status: 'in_review' },
         { transaction },
       );
+      await dropReviewDraft(transaction, job.id, null, target.id);
       await recordEvent(transaction, job.id, actor.id, 'claim_reassigned', { from, to: target.id });
     }
     return { moved: jobs.filter((j) => j.claimedById === target.id).length };

@@ -14,6 +14,7 @@ import { recordEvent } from './audit-service';
 import { assertHoldsClaim } from './claims-service';
 import { queueDecisionEmail } from './decision-email-service';
 import { toQueueRow } from './queue-service';
+import { dropReviewDraft, ownReviewDraft } from './review-draft-service';
 import { toReworkItemView } from './rework-service';
 import { currentRubric, toRubricView } from './rubric-service';
 
@@ -45,11 +46,14 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
     secondClaim = secondClaimedByMe ? second.claimExpiresAt!.toISOString() : null;
   }
   const [revision, rubric] = await Promise.all([revisionOf(jobId, number), currentRubric()]);
+  const holdsJobClaim =
+    secondReviewId === null && job.claimedById === actor.id && job.claimExpiresAt !== null && job.claimExpiresAt > new Date();
   // Working on the job counts as activity: the claimant's claim is extended.
-  if (secondReviewId === null && job.claimedById === actor.id && job.claimExpiresAt && job.claimExpiresAt > new Date()) {
+  if (holdsJobClaim) {
     job.claimExpiresAt = claimExpiresAt(new Date(), config.review.claimMinutes);
     await job.save();
   }
+  const draft = holdsJobClaim || secondClaimedByMe ? await ownReviewDraft(actor, jobId, secondReviewId, number) : null;
   return {
     job: { ...toQueueRow(job), street: job.street, city: job.city },
     revision: {
@@ -65,6 +69,7 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
     claimExpiresAt: secondClaim !== undefined ? secondClaim : job.claimExpiresAt ? job.claimExpiresAt.toISOString() : null,
     secondReviewId,
     secondClaimedByMe,
+    draft,
     // A blind second reviewer sees nothing of earlier reviews.
     previous: secondReviewId === null ? await previousContext(jobId, number) : null,
   };
@@ -146,6 +151,7 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
     job.claimedAt = null;
     job.claimExpiresAt = null;
     await job.save({ transaction });
+    await dropReviewDraft(transaction, jobId, null);
     await recordEvent(transaction, jobId, actor.id, 'reviewed', {
       decision: input.decision,
       score: evaluation.score,
@@ -307,6 +313,7 @@ export async function claimSecondReview(actor: Actor, secondReviewId: number) {
   );
   if (changed === 0)
     throw conflict(second.secondReviewId ? 'This second review is already done.' : 'Another reviewer is scoring this second review.');
+  await dropReviewDraft(undefined, second.jobId, secondReviewId, actor.id);
   return { secondReviewId, claimExpiresAt: expiresAt.toISOString() };
 }
 
@@ -349,6 +356,7 @@ export async function submitSecondReview(actor: Actor, secondReviewId: number, i
     await saveScores(review.id, rubric!.criteria, input.scores, transaction);
     second.secondReviewId = review.id;
     await second.save({ transaction });
+    await dropReviewDraft(transaction, second.jobId, secondReviewId);
     await recordEvent(transaction, second.jobId, actor.id, 'blind_second_review', { revision: second.revisionNumber });
     return { reviewId: review.id, score: evaluation.score, passed: evaluation.passed };
   });

@@ -37,6 +37,16 @@ export const reviewRules = [
   body('scores.*.comment', 'Text of at most 2000 characters').isString().isLength({ max: 2000 }),
 ];
 
+// A draft may be incomplete: any score may still be missing, and no decision chosen yet.
+export const reviewDraftRules = [
+  body('decision', oneOf(DECISIONS)).optional({ values: 'null' }).isIn(DECISIONS),
+  body('scores', 'A list of criterion scores').isArray({ max: 50 }),
+  body('scores.*.key', 'Missing criterion key').isString().isLength({ min: 1, max: 40 }),
+  body('scores.*.score', 'A whole number from 0 to 4, or null').optional({ values: 'null' }).isInt({ min: 0, max: 4 }).toInt(),
+  body('scores.*.stockReason', 'Text of at most 120 characters').optional({ values: 'null' }).isString().isLength({ max: 120 }),
+  body('scores.*.comment', 'Text of at most 2000 characters').isString().isLength({ max: 2000 }),
+];
+
 export const reassignRules = [
   body('toReviewerId', 'Choose a reviewer').isInt({ min: 1 }).toInt(),
   body('jobIds', 'A list of job ids').optional().isArray({ min: 1, max: 200 }),

@@ -16,6 +16,7 @@ type BadInputCase = {
   prepare?: (me: { id: number }) => Promise<{ path?: string }>;
   body: object;
   upload?: Upload;
+  headers?: Record<string, string>;
   fields: string[];
 };
 
@@ -78,6 +79,7 @@ const CASES: Record<string, BadInputCase> = {
     as: 'technician',
     tables: ['capture_drafts', 'capture_revisions'],
     prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/record` }),
+    headers: { 'If-Match': '"1"' },
     body: badRecord(),
     fields: ['cameraClass', 'exteriorStations', 'rooms.0.reflective.0', 'rooms.0.stations', 'units'],
   },
@@ -85,8 +87,17 @@ const CASES: Record<string, BadInputCase> = {
     as: 'technician',
     tables: ['capture_revisions'],
     prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/submit` }),
+    headers: { 'If-Match': '"1"' },
     body: badRecord(),
     fields: ['cameraClass', 'exteriorStations', 'rooms.0.reflective.0', 'rooms.0.stations', 'units'],
+  },
+  'PUT /api/jobs/:id/review-draft': {
+    as: 'reviewer',
+    tables: ['review_drafts'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await claimFor(await createSubmittedJob(), me.id)).id}/review-draft` }),
+    headers: { 'If-Match': '"0"' },
+    body: { decision: 'maybe', scores: 'all fine' },
+    fields: ['decision', 'scores'],
   },
   'POST /api/jobs/:id/files': {
     as: 'technician',
@@ -213,7 +224,7 @@ describe('bad input on write routes', () => {
       const agent = signed?.agent ?? request.agent(app).set('x-sightline-request', '1');
       const path = (spec.prepare && signed ? (await spec.prepare(signed.user)).path : undefined) ?? pattern;
       const before = await Promise.all(spec.tables.map(countRows));
-      const res = await send(agent as Agent, method, path, spec.body, spec.upload);
+      const res = await send(agent as Agent, method, path, spec.body, spec.upload, spec.headers);
       expect(res.status).toBe(400);
       expect(Object.keys(res.body.error.fields).sort()).toEqual(spec.fields);
       expect(await Promise.all(spec.tables.map(countRows))).toEqual(before);

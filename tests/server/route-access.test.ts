@@ -32,7 +32,9 @@ const EVERYONE: Who[] = ['anonymous', ...ROLES];
 type RouteCase = {
   allowed: Who[];
   // Builds what a valid request needs (rows, ids); `me` is the signed-in user, if any.
-  prepare?: (me: { id: number; role: Role } | null) => Promise<{ path?: string; body?: object; upload?: Upload }>;
+  prepare?: (
+    me: { id: number; role: Role } | null,
+  ) => Promise<{ path?: string; body?: object; upload?: Upload; headers?: Record<string, string> }>;
 };
 
 const app: Express = createApp();
@@ -41,6 +43,9 @@ afterAll(async () => {
   await resetSignInLimits();
   await sequelize.close();
 });
+
+// A new job starts with an empty draft at version 1, so its first save is based on it.
+const FIRST_SAVE = { 'If-Match': '"1"' };
 
 const ROUTES: Record<string, RouteCase> = {
   'GET /api/health': { allowed: EVERYONE },
@@ -82,11 +87,11 @@ const ROUTES: Record<string, RouteCase> = {
   },
   'PUT /api/jobs/:id/record': {
     allowed: ['technician'],
-    prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/record`, body: completeRecord() }),
+    prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/record`, body: completeRecord(), headers: FIRST_SAVE }),
   },
   'POST /api/jobs/:id/submit': {
     allowed: ['technician'],
-    prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/submit`, body: completeRecord() }),
+    prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/submit`, body: completeRecord(), headers: FIRST_SAVE }),
   },
   'GET /api/jobs/:id/revisions/:number': {
     allowed: [...ROLES],
@@ -152,6 +157,15 @@ const ROUTES: Record<string, RouteCase> = {
       return { path: `/api/jobs/${job.id}/reviews`, body: { decision: 'accept', scores: await fullScores() } };
     },
   },
+  'PUT /api/jobs/:id/review-draft': {
+    allowed: ['reviewer'],
+    prepare: async (me) => ({
+      path: `/api/jobs/${(await claimedFor(me)).id}/review-draft`,
+      body: { decision: null, scores: [] },
+      // No review draft exists yet: version 0.
+      headers: { 'If-Match': '"0"' },
+    }),
+  },
   'GET /api/second-reviews': { allowed: ['reviewer'] },
   'POST /api/second-reviews/:id/claim': {
     allowed: ['reviewer'],
@@ -201,6 +215,12 @@ const ROUTES: Record<string, RouteCase> = {
   },
 };
 
+// A claim the signed-in reviewer holds (anyone else's claim for the other roles).
+async function claimedFor(me: { id: number; role: Role } | null) {
+  const job = await createSubmittedJob();
+  return claimFor(job, me?.role === 'reviewer' ? me.id : (await createUser({ role: 'reviewer' })).id);
+}
+
 // A job the signed-in technician owns (anyone else's job for the other roles).
 function jobFor(me: { id: number; role: Role } | null) {
   return createJob({ technicianId: me?.role === 'technician' ? me.id : undefined });
@@ -227,7 +247,7 @@ describe('API route access', () => {
         }
         const prepared = spec.prepare ? await spec.prepare(me) : {};
         const path = prepared.path ?? pattern;
-        const res = await send(agent, method, path, prepared.body, prepared.upload);
+        const res = await send(agent, method, path, prepared.body, prepared.upload, prepared.headers);
         if (expected === '2xx') {
           if (res.status < 200 || res.status >= 300) throw new Error(`expected 2xx, got ${res.status} ${JSON.stringify(res.body)}`);
         } else {
