@@ -29,3 +29,28 @@ export type StoredFile = {
   sha256: string;
   uploadedAt: string;
 };
+
+// The default upload limit; the server's UPLOAD_MAX_MB may lower or raise it.
+export const DEFAULT_UPLOAD_MAX_MB = 25;
+export const DEFAULT_UPLOAD_MAX_BYTES = DEFAULT_UPLOAD_MAX_MB * 1024 * 1024;
+
+const KIND_PLURAL: Record<FileKind, string> = { photo: 'Photos', sketch: 'Floor sketches', station_coordinates: 'Station files' };
+
+const megabytes = (bytes: number) => `${Math.round((bytes / 1024 / 1024) * 10) / 10} MB`;
+
+export function fileTooLargeMessage(maxBytes: number, bytes?: number, kind?: FileKind): string {
+  const what = kind ? KIND_PLURAL[kind] : 'Files';
+  return `${what} up to ${megabytes(maxBytes)}${bytes !== undefined ? `; this one is ${megabytes(bytes)}` : ''}.`;
+}
+
+// Checked on the phone before anything is sent: a file that can never pass is not uploaded.
+// The content type the browser reports is only a first check; the server reads the bytes.
+export function uploadProblem(kind: FileKind, file: { size: number; type: string }, maxBytes = DEFAULT_UPLOAD_MAX_BYTES): string | null {
+  if (file.size === 0) return 'This file is empty.';
+  if (file.size > maxBytes) return fileTooLargeMessage(maxBytes, file.size, kind);
+  const csvLike = kind === 'station_coordinates' && (file.type === '' || /csv|text\/plain|excel/.test(file.type));
+  if (file.type && !csvLike && !ACCEPTED_TYPES[kind].includes(file.type)) {
+    return `${KIND_PLURAL[kind]} must be ${ACCEPTED_DESCRIPTION[kind]}; this one is ${file.type}.`;
+  }
+  return null;
+}

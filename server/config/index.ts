@@ -2,6 +2,7 @@
 // database.js reads the same DB_* variables for sequelize-cli.
 import crypto from 'node:crypto';
 
+import { DEFAULT_UPLOAD_MAX_MB } from '../../shared/files';
 import { DEFAULT_CLAIM_MINUTES } from '../../shared/review-rules';
 
 const env = process.env;
@@ -76,7 +77,7 @@ export const config = {
     handheld_lidar: env.SPACING_HANDHELD_LIDAR_M ? number('SPACING_HANDHELD_LIDAR_M', 0) : null,
     laser_scanner: number('SPACING_LASER_SCANNER_M', 10),
   } as Record<'tripod_depth' | 'camera_360' | 'handheld_lidar' | 'laser_scanner', number | null>,
-  uploadMaxBytes: number('UPLOAD_MAX_MB', 25) * 1024 * 1024,
+  uploadMaxBytes: number('UPLOAD_MAX_MB', DEFAULT_UPLOAD_MAX_MB) * 1024 * 1024,
   instanceId: env.INSTANCE_ID ?? crypto.randomUUID(),
 };
 

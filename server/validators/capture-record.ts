@@ -3,6 +3,7 @@
 // pre-submit checks, so that autosave never loses a half-typed record.
 import { body } from 'express-validator';
 
+import { RECORD_LIMITS as L } from '../../shared/capture-limits';
 import {
   CAMERA_CLASSES,
   GAP_CAUSES,
@@ -27,32 +28,35 @@ export const captureRecordRules = [
   body('cameraClass', oneOf(CAMERA_CLASSES)).optional({ values: 'null' }).isIn(CAMERA_CLASSES),
   body('units', 'Choose ft or m').isIn(['ft', 'm']),
 
-  body('levels', 'A list of at most 10 levels').isArray({ max: 10 }),
+  body('levels', `A list of at most ${L.levels} levels`).isArray({ max: L.levels }),
   body('levels.*.level', oneOf(LEVEL_KINDS)).isIn(LEVEL_KINDS),
-  count('levels.*.stations', 2000),
+  count('levels.*.stations', L.levelStations),
   body('levels', 'Each level only once').custom(
     (levels: { level: string }[]) => new Set(levels.map((l) => l.level)).size === levels.length,
   ),
 
-  body('rooms', 'A list of at most 200 rooms').isArray({ max: 200 }),
+  body('rooms', `A list of at most ${L.rooms} rooms`).isArray({ max: L.rooms }),
   key('rooms.*.key'),
-  text('rooms.*.name', 80),
+  text('rooms.*.name', L.roomName),
   body('rooms.*.level', oneOf(LEVEL_KINDS)).isIn(LEVEL_KINDS),
-  optionalMeasure('rooms.*.lengthM', 200),
-  optionalMeasure('rooms.*.widthM', 200),
-  optionalMeasure('rooms.*.areaM2', 5000),
-  count('rooms.*.stations', 500),
+  optionalMeasure('rooms.*.lengthM', L.roomLengthM),
+  optionalMeasure('rooms.*.widthM', L.roomWidthM),
+  optionalMeasure('rooms.*.areaM2', L.roomAreaM2),
+  count('rooms.*.stations', L.roomStations),
   flag('rooms.*.doorwayStation'),
   body('rooms.*.reflective', 'A list of reflective surface counts').isArray({ max: REFLECTIVE_KINDS.length }),
   body('rooms.*.reflective.*.kind', oneOf(REFLECTIVE_KINDS)).isIn(REFLECTIVE_KINDS),
-  count('rooms.*.reflective.*.found', 100),
-  count('rooms.*.reflective.*.flagged', 100),
+  count('rooms.*.reflective.*.found', L.reflectiveCount),
+  count('rooms.*.reflective.*.flagged', L.reflectiveCount),
   body('rooms.*.reflective.*', 'Flagged cannot be more than found').custom(
     (s: { found: number; flagged: number }) => Number(s.flagged) <= Number(s.found),
   ),
 
-  count('exteriorStations', 2000),
-  body('totalStations', 'A whole number from 0 to 5000').optional({ values: 'null' }).isInt({ min: 0, max: 5000 }).toInt(),
+  count('exteriorStations', L.exteriorStations),
+  body('totalStations', `A whole number from 0 to ${L.totalStations}`)
+    .optional({ values: 'null' })
+    .isInt({ min: 0, max: L.totalStations })
+    .toInt(),
   body('glazingFlagged', oneOf(GLAZING_FLAGGED)).optional({ values: 'null' }).isIn(GLAZING_FLAGGED),
 
   body('models', 'A list of at most 20 models').isArray({ max: 20 }),
@@ -87,7 +91,7 @@ export const captureRecordRules = [
   body('damageAreas.*.photoFileIds', 'A list of photo ids').isArray({ max: 50 }),
   body('damageAreas.*.photoFileIds.*', 'Photo ids are whole numbers').isInt({ min: 1 }).toInt(),
 
-  count('panoramas.count', 500),
+  count('panoramas.count', L.panoramas),
   body('panoramas.roomKeys', 'A list of room keys').isArray({ max: 200 }),
   body('panoramas.roomKeys.*', 'Missing room key').isString().isLength({ max: 40 }),
 
@@ -96,6 +100,6 @@ export const captureRecordRules = [
 
   body('safety.hazards', 'A list of hazards').isArray({ max: HAZARDS.length }),
   body('safety.hazards.*', oneOf(HAZARDS)).isIn(HAZARDS),
-  text('safety.note', 1000),
-  text('notes', 4000),
+  text('safety.note', L.safetyNote),
+  text('notes', L.notes),
 ];

@@ -25,7 +25,8 @@ export const jobCreateRules = [
     .isString()
     .matches(ISO_DATE)
     .isISO8601({ strict: true })
-    .custom((v: string, { req }) => typeof req.body.lossDate !== 'string' || v >= req.body.lossDate),
+    // Compared only with a well-formed loss date: a bad loss date is reported on its own field.
+    .custom((v: string, { req }) => typeof req.body.lossDate !== 'string' || !ISO_DATE.test(req.body.lossDate) || v >= req.body.lossDate),
   body('dueAt', 'Enter the delivery due date and time').isISO8601({ strict: true }),
   body('priority', `Choose one of: ${PRIORITIES.join(', ')}`).isIn(PRIORITIES),
   body('technicianId', 'Choose a technician').isInt({ min: 1 }).toInt(),

@@ -66,7 +66,7 @@ describe('POST /api/jobs/:id/files', () => {
     const before = await countRows('files');
     const res = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', big, 'huge.png');
     expect(res.status).toBe(413);
-    expect(res.body.error.fields).toEqual({ file: 'Too large' });
+    expect(res.body.error.fields).toEqual({ file: 'Files up to 25 MB; this one is 26 MB.' });
     expect(await countRows('files')).toBe(before);
   });
 
@@ -111,5 +111,61 @@ describe('DELETE /api/jobs/:id/files/:fileId', () => {
     expect((await agent.delete(`/api/jobs/${job.id}/files/${upload.body.file.id}`)).status).toBe(204);
     expect((await agent.get(`/api/jobs/${job.id}`)).body.files).toEqual([]);
     expect((await StoredFile.findByPk(upload.body.file.id))!.detachedAt).not.toBeNull();
+  });
+});
+
+describe('POST /api/jobs/:id/files, a file that can never pass', () => {
+  // Only the declared length is sent with a first slice of the body: the answer must come
+  // back before the rest (30 MB) is ever sent.
+  it('refuses a declared 30 MB upload (413, limit named) before the body is read', async () => {
+    const http = await import('node:http');
+    const { createJob, createUser, TEST_PASSWORD } = await import('../helpers/factories');
+    const { default: request } = await import('supertest');
+    const user = await createUser({ role: 'technician' });
+    const job = await createJob({ technicianId: user.id });
+    const signIn = await request(app)
+      .post('/api/session')
+      .set('x-sightline-request', '1')
+      .send({ email: user.email, password: TEST_PASSWORD });
+    const cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
+    const server = app.listen(0, '127.0.0.1');
+    await new Promise((resolve) => server.once('listening', resolve));
+    const { port } = server.address() as { port: number };
+    const before = await countRows('files');
+    try {
+      const answer = await new Promise<{ status: number; body: string; sentBytes: number }>((resolve, reject) => {
+        let sentBytes = 0;
+        const req = http.request({
+          host: '127.0.0.1',
+          port,
+          method: 'POST',
+          path: `/api/jobs/${job.id}/files`,
+          headers: {
+            cookie,
+            'x-sightline-request': '1',
+            'content-type': 'multipart/form-data; boundary=sightline',
+            'content-length': String(30 * 1024 * 1024),
+          },
+        });
+        req.on('response', (res) => {
+          let body = '';
+          res.on('data', (chunk) => (body += chunk));
+          res.on('end', () => {
+            req.destroy();
+            resolve({ status: res.statusCode ?? 0, body, sentBytes });
+          });
+        });
+        req.on('error', reject);
+        const slice = Buffer.alloc(64 * 1024, 0x61);
+        req.write(slice);
+        sentBytes += slice.length;
+      });
+      expect(answer.status).toBe(413);
+      expect(JSON.parse(answer.body).error.message).toBe('Files up to 25 MB; this one is 30 MB.');
+      expect(answer.sentBytes).toBeLessThan(1024 * 1024);
+      expect(await countRows('files')).toBe(before);
+    } finally {
+      server.close();
+    }
   });
 });

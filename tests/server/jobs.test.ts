@@ -120,6 +120,27 @@ describe('PATCH /api/jobs/:id', () => {
     expect(reloaded!.technicianId).toBe(other.id);
     expect(reloaded!.priority).toBe('catastrophe');
   });
+
+  // Each field alone: the others keep their values.
+  const cases: [string, () => Promise<string | number>][] = [
+    ['technicianId', async () => (await createUser({ role: 'technician' })).id],
+    ['priority', async () => 'urgent'],
+    ['dueAt', async () => new Date(Date.now() + 9 * 86_400_000).toISOString()],
+    ['siteVisitDate', async () => '2026-11-30'],
+  ];
+  it.each(cases)('changes only %s when only %s is sent', async (field, value) => {
+    const { agent } = await signedInAgent(app, 'manager');
+    const job = await createJob();
+    const before = (await Job.findByPk(job.id))!.toJSON() as Record<string, unknown>;
+    const sent = await value();
+    const res = await agent.patch(`/api/jobs/${job.id}`).send({ [field]: sent });
+    expect(res.status).toBe(200);
+    const after = (await Job.findByPk(job.id))!.toJSON() as Record<string, unknown>;
+    for (const other of ['technicianId', 'priority', 'dueAt', 'siteVisitDate'].filter((f) => f !== field)) {
+      expect(after[other]).toEqual(before[other]);
+    }
+    expect(field === 'dueAt' ? (after.dueAt as Date).toISOString() : after[field]).toEqual(sent);
+  });
 });
 
 describe('GET /api/technicians', () => {
