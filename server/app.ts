@@ -30,6 +30,12 @@ export function createSessionStore() {
   });
 }
 
+// Hashed bundle files never change under their name; the page and the worker are revalidated.
+function cacheControlFor(webDir: string, file: string) {
+  const relative = path.relative(webDir, file).split(path.sep).join('/');
+  return relative.startsWith('_expo/static/') || relative.startsWith('assets/') ? 'public, max-age=31536000, immutable' : 'no-cache';
+}
+
 export function createApp(options: { webDir?: string } = {}) {
   const app = express();
   app.set('trust proxy', config.trustProxy);
@@ -76,9 +82,14 @@ export function createApp(options: { webDir?: string } = {}) {
 
   const webDir = options.webDir ?? path.resolve(__dirname, '..', 'dist');
   if (fs.existsSync(path.join(webDir, 'index.html'))) {
-    app.use(express.static(webDir, { index: false, maxAge: '1h' }));
+    app.use(
+      express.static(webDir, { index: false, setHeaders: (res, file) => res.setHeader('Cache-Control', cacheControlFor(webDir, file)) }),
+    );
+    // A missing bundle chunk or worker must be a 404, never index.html: a stale page would
+    // otherwise load HTML as script and the service worker would fail to register.
+    app.get(['/_expo/{*rest}', '/assets/{*rest}', '/sw.js'], (_req, res) => res.status(404).type('text/plain').send('Not found'));
     // Single-page app: every other path is a client route.
-    app.get('/{*splat}', (_req, res) => res.sendFile(path.join(webDir, 'index.html')));
+    app.get('/{*splat}', (_req, res) => res.setHeader('Cache-Control', 'no-cache').sendFile(path.join(webDir, 'index.html')));
   }
 
   app.use(errorHandler);

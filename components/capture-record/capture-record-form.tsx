@@ -1,18 +1,20 @@
-import { useMemo, useState } from 'react';
+import { useCallback, useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { ApiError } from '@/components/lib/api-client';
-import { useRecordSaveMutation, useRecordSubmitMutation } from '@/components/queries/capture-record';
+import { saveRecordDraft, useRecordSubmitMutation } from '@/components/queries/capture-record';
 import { StationSection } from '@/components/stations/station-section';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+import { space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { type JobDetail } from '@/shared/api-types';
+import type { CaptureRecord } from '@/shared/capture-record';
 import { checkCaptureRecord } from '@/shared/pre-submit-checks';
 import type { LengthUnit } from '@/shared/units';
 
+import { ConflictPanel } from './conflict-panel';
 import { DamageSection } from './damage-section';
 import { FilesSection } from './files-section';
 import { FindingsPanel } from './findings-panel';
@@ -23,21 +25,33 @@ import { LevelsSection } from './levels-section';
 import { ModelsSection } from './models-section';
 import { CameraSection, NotesSection, PanoramasSection, ProcessingSection, SafetySection } from './other-sections';
 import { RoomsSection } from './rooms-section';
+import { SaveStatus } from './save-status';
+import { toFormFields } from './server-fields';
 import { StationsSection } from './stations-section';
-import { describeAutosave, useAutosave } from './use-autosave';
+import { type DraftVersion, useRecordSync } from './use-record-sync';
 
-export function CaptureRecordForm({ detail }: { detail: JobDetail }) {
+const recordOf = (values: FormValues) => toRecord(values).record;
+
+export function CaptureRecordForm({ detail, userId }: { detail: JobDetail; userId: number }) {
   const jobId = detail.job.id;
   const form = useForm<FormValues>({ defaultValues: toFormValues(detail.record) });
   const values = useWatch({ control: form.control }) as FormValues;
   const conversion = useMemo(() => toRecord(values), [values]);
   const findings = useMemo(() => checkCaptureRecord(conversion.record), [conversion.record]);
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
-  const save = useRecordSaveMutation(jobId);
   const submit = useRecordSubmitMutation(jobId);
-  const parseBlocked = Object.keys(conversion.errors).length > 0;
-  const autosave = useAutosave(conversion.record, parseBlocked, save.mutateAsync);
   const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
+  const saveRecord = useCallback((record: CaptureRecord, baseVersion: number) => saveRecordDraft(jobId, record, baseVersion), [jobId]);
+  const replaceValues = useCallback((next: FormValues) => form.reset(next), [form]);
+  const sync = useRecordSync({
+    jobId,
+    userId,
+    server: { record: detail.record, version: detail.recordVersion, savedAt: detail.recordSavedAt },
+    values,
+    toRecord: recordOf,
+    saveRecord,
+    replaceValues,
+  });
 
   // Switching units re-expresses the typed sizes in the new unit; the stored SI values do not change.
   const changeUnits = (unit: LengthUnit) => {
@@ -47,14 +61,19 @@ export function CaptureRecordForm({ detail }: { detail: JobDetail }) {
 
   const onSubmit = async () => {
     setServerErrors({});
+    await sync.flush();
+    if (sync.status.kind === 'conflict') return;
     try {
-      await submit.mutateAsync(conversion.record);
+      const result = await submit.mutateAsync({ record: conversion.record, baseVersion: sync.baseVersion() });
+      await sync.submitted(result.recordVersion);
     } catch (error) {
-      if (error instanceof ApiError) setServerErrors(error.fields);
+      if (!(error instanceof ApiError)) return;
+      if (error.code === 'stale_version') sync.enterConflict((error.body as { current: DraftVersion }).current);
+      else setServerErrors(toFormFields(error.fields, conversion.record));
     }
   };
 
-  const errors = { ...serverErrors, ...conversion.errors };
+  const errors = { ...sync.refused, ...serverErrors, ...conversion.errors };
   const photos = detail.files.filter((f) => f.kind === 'photo');
   const isResubmission = detail.revisions.length > 0;
 
@@ -65,7 +84,7 @@ export function CaptureRecordForm({ detail }: { detail: JobDetail }) {
       <Button
         label={isResubmission ? `Submit revision ${detail.revisions.length + 1}` : 'Submit capture record'}
         onPress={() => void onSubmit()}
-        disabled={findings.missing.length > 0 || parseBlocked}
+        disabled={findings.missing.length > 0 || Object.keys(conversion.errors).length > 0 || sync.status.kind === 'conflict'}
         busy={submit.isPending}
         accessibilityHint={findings.missing.length ? 'Complete the missing facts first' : undefined}
       />
@@ -77,14 +96,15 @@ export function CaptureRecordForm({ detail }: { detail: JobDetail }) {
     <RecordFormContext.Provider value={{ control: form.control, errors, unitLabel: values.units }}>
       <View style={[styles.layout, wide && styles.wideLayout]}>
         <View style={[styles.sections, wide && { flex: 2 }]} role="form" aria-label="Capture record">
-          <Text
-            variant="muted"
-            role="status"
-            aria-live="polite"
-            style={autosave.state.status === 'error' || autosave.state.status === 'blocked' ? { color: colors.fail } : undefined}
-          >
-            {describeAutosave(autosave.state)}
-          </Text>
+          <SaveStatus status={sync.status} problems={Object.keys(errors).length} />
+          {sync.status.kind === 'conflict' && sync.mine ? (
+            <ConflictPanel
+              mine={recordOf(sync.mine)}
+              theirs={sync.status.theirs}
+              onKeepMine={() => void sync.keepMine()}
+              onUseTheirs={() => sync.status.kind === 'conflict' && void sync.useTheirs(toFormValues(sync.status.theirs.record))}
+            />
+          ) : null}
           <CameraSection onUnitsChange={changeUnits} />
           <LevelsSection />
           <RoomsSection />
@@ -93,7 +113,7 @@ export function CaptureRecordForm({ detail }: { detail: JobDetail }) {
           <GapsSection />
           <DamageSection photos={photos} defaultLossType={detail.job.lossType} />
           <PanoramasSection />
-          <FilesSection jobId={jobId} files={detail.files} editable />
+          <FilesSection jobId={jobId} files={detail.files} editable userId={userId} />
           <StationSection jobId={jobId} revision={null} hasFile={detail.files.some((f) => f.kind === 'station_coordinates')} />
           <SafetySection />
           <NotesSection />

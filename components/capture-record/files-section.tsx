@@ -2,9 +2,8 @@ import * as DocumentPicker from 'expo-document-picker';
 import { useState } from 'react';
 import { Linking, Pressable, StyleSheet, View } from 'react-native';
 
-import { ApiError } from '@/components/lib/api-client';
 import { formatBytes } from '@/components/lib/format';
-import { useFileDetachMutation, useFileUploadMutation } from '@/components/queries/job-files';
+import { useFileDetachMutation } from '@/components/queries/job-files';
 import { Button } from '@/components/ui/button';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Notice } from '@/components/ui/notice';
@@ -12,43 +11,31 @@ import { ProgressBar } from '@/components/ui/progress-bar';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
-import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, FILE_KINDS, type FileKind, type StoredFile } from '@/shared/files';
+import {
+  ACCEPTED_DESCRIPTION,
+  ACCEPTED_TYPES,
+  DEFAULT_UPLOAD_MAX_MB,
+  FILE_KIND_LABELS,
+  FILE_KINDS,
+  type FileKind,
+  type StoredFile,
+} from '@/shared/files';
 
-type Pending = { kind: FileKind; name: string; blob: Blob };
-type UploadState =
-  | { status: 'idle' }
-  | { status: 'uploading'; pending: Pending; fraction: number }
-  | { status: 'done'; name: string }
-  | { status: 'failed'; pending: Pending; message: string };
+import { type UploadItem, useUploadQueue } from './use-upload-queue';
 
-export function FilesSection({ jobId, files, editable }: { jobId: number; files: StoredFile[]; editable: boolean }) {
+type Props = { jobId: number; files: StoredFile[]; editable: boolean; userId?: number };
+
+export function FilesSection({ jobId, files, editable, userId }: Props) {
   const [kind, setKind] = useState<FileKind>('photo');
-  const [state, setState] = useState<UploadState>({ status: 'idle' });
-  const upload = useFileUploadMutation(jobId);
+  const queue = useUploadQueue(jobId, userId ?? 0);
   const detach = useFileDetachMutation(jobId);
-
-  const send = async (pending: Pending) => {
-    setState({ status: 'uploading', pending, fraction: 0 });
-    try {
-      await upload.mutateAsync({
-        kind: pending.kind,
-        file: pending.blob,
-        name: pending.name,
-        onProgress: (fraction) => setState({ status: 'uploading', pending, fraction }),
-      });
-      setState({ status: 'done', name: pending.name });
-    } catch (error) {
-      const message = error instanceof ApiError ? (error.fields.file ?? error.fields.kind ?? error.message) : 'Upload failed.';
-      setState({ status: 'failed', pending, message });
-    }
-  };
 
   const choose = async () => {
     const result = await DocumentPicker.getDocumentAsync({ type: ACCEPTED_TYPES[kind], multiple: false, copyToCacheDirectory: false });
     if (result.canceled || !result.assets[0]) return;
     const asset = result.assets[0];
     const blob = asset.file ?? (await (await fetch(asset.uri)).blob());
-    await send({ kind, name: asset.name, blob });
+    await queue.add(kind, asset.name, blob);
   };
 
   return (
@@ -79,19 +66,35 @@ export function FilesSection({ jobId, files, editable }: { jobId: number; files:
             value={kind}
             onChange={setKind}
           />
-          <Text variant="muted">{`${ACCEPTED_DESCRIPTION[kind]}, up to 25 MB. The type is checked from the file's content.`}</Text>
-          <Button label="Choose a file and upload" tone="secondary" onPress={() => void choose()} busy={state.status === 'uploading'} />
-          {state.status === 'uploading' ? <ProgressBar fraction={state.fraction} label={`Uploading ${state.pending.name}`} /> : null}
-          {state.status === 'done' ? <ProgressBar fraction={1} label={`Uploaded ${state.name}`} /> : null}
-          {state.status === 'failed' ? (
-            <View style={{ gap: space.sm }}>
-              <Notice tone="error">{`${state.pending.name}: ${state.message}`}</Notice>
-              <Button label="Retry upload" onPress={() => void send(state.pending)} />
-            </View>
-          ) : null}
+          <Text variant="muted">{`${ACCEPTED_DESCRIPTION[kind]}, up to ${DEFAULT_UPLOAD_MAX_MB} MB. The type is checked from the file's content. Files wait on this phone while offline.`}</Text>
+          <Button label="Choose a file and upload" tone="secondary" onPress={() => void choose()} />
+          {queue.items.map((item) => (
+            <UploadRow key={item.id} item={item} onRetry={() => void queue.retry()} onDismiss={() => queue.dismiss(item.id)} />
+          ))}
         </>
       ) : null}
     </Section>
+  );
+}
+
+const STATE_TEXT: Record<UploadItem['state'], string> = {
+  waiting: 'Waiting to upload',
+  uploading: 'Uploading',
+  failed: 'Upload failed',
+  refused: 'Not uploaded',
+  done: 'Uploaded',
+};
+
+function UploadRow({ item, onRetry, onDismiss }: { item: UploadItem; onRetry: () => void; onDismiss: () => void }) {
+  return (
+    <View style={{ gap: space.xs }}>
+      <ProgressBar fraction={item.fraction} label={`${STATE_TEXT[item.state]} ${item.name}`} />
+      {item.message ? <Notice tone={item.state === 'refused' || item.state === 'failed' ? 'error' : 'info'}>{item.message}</Notice> : null}
+      <View style={styles.actions}>
+        {item.state === 'failed' && item.retryable ? <Button label="Retry upload" onPress={onRetry} /> : null}
+        {item.state === 'refused' || item.state === 'done' ? <Button label="Dismiss" tone="secondary" onPress={onDismiss} /> : null}
+      </View>
+    </View>
   );
 }
 

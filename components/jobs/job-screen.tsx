@@ -56,10 +56,15 @@ export function JobScreen({ id }: { id: number }) {
 
       {user?.role === 'manager' || user?.role === 'admin' ? <AssignmentPanel job={job} /> : null}
       {job.status === 'rework_requested' || (latest !== null && latest > 1) ? (
-        <ReworkChecklist jobId={job.id} editable={canEdit} files={query.data.files} />
+        <ReworkChecklist
+          jobId={job.id}
+          status={job.status}
+          editable={canEdit && job.status === 'rework_requested'}
+          files={query.data.files}
+        />
       ) : null}
       {canEdit ? (
-        <CaptureRecordForm key={query.data.recordVersion} detail={query.data} />
+        <CaptureRecordForm key={job.id} detail={query.data} userId={user.id} />
       ) : (
         <View style={{ gap: space.md }}>
           {latest === null ? (

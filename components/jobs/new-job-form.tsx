@@ -7,6 +7,7 @@ import { type NewJob, useJobCreateMutation } from '@/components/queries/jobs';
 import { useTechniciansQuery } from '@/components/queries/technicians';
 import { Button } from '@/components/ui/button';
 import { ChoiceField } from '@/components/ui/choice-field';
+import { DateField } from '@/components/ui/date-field';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { TextField } from '@/components/ui/text-field';
@@ -55,11 +56,16 @@ export function NewJobForm() {
   });
 
   const submit = handleSubmit(async (values) => {
-    const dueAt = new Date(`${values.dueDate}T${values.dueTime || '17:00'}`);
-    if (Number.isNaN(dueAt.getTime())) {
-      setError('dueDate', { message: 'Enter the due date as YYYY-MM-DD' });
+    // Each part is checked on its own, so the message lands on the part that is wrong.
+    if (!/^\d{4}-\d{2}-\d{2}$/.test(values.dueDate) || Number.isNaN(new Date(`${values.dueDate}T12:00`).getTime())) {
+      setError('dueDate', { message: 'Choose the delivery due date' });
       return;
     }
+    if (!/^\d{2}:\d{2}$/.test(values.dueTime) || Number.isNaN(new Date(`${values.dueDate}T${values.dueTime}`).getTime())) {
+      setError('dueTime', { message: 'Choose the due time (HH:MM)' });
+      return;
+    }
+    const dueAt = new Date(`${values.dueDate}T${values.dueTime}`);
     try {
       const { job } = await create.mutateAsync({
         ...values,
@@ -76,6 +82,24 @@ export function NewJobForm() {
       }
     }
   });
+
+  const date = (name: 'lossDate' | 'siteVisitDate' | 'dueDate' | 'dueTime', label: string, kind: 'date' | 'time', hint?: string) => (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <DateField
+          label={label}
+          kind={kind}
+          hint={hint}
+          value={String(field.value ?? '')}
+          onChange={field.onChange}
+          onBlur={field.onBlur}
+          error={fieldState.error?.message}
+        />
+      )}
+    />
+  );
 
   const text = (name: keyof Values, label: string, hint?: string) => (
     <Controller
@@ -131,12 +155,12 @@ export function NewJobForm() {
           )}
         />
         <View style={styles.row}>
-          <View style={styles.grow}>{text('lossDate', 'Loss date', 'YYYY-MM-DD')}</View>
-          <View style={styles.grow}>{text('siteVisitDate', 'Site-visit date (optional)', 'YYYY-MM-DD')}</View>
+          <View style={styles.grow}>{date('lossDate', 'Loss date', 'date')}</View>
+          <View style={styles.grow}>{date('siteVisitDate', 'Site-visit date (optional)', 'date')}</View>
         </View>
         <View style={styles.row}>
-          <View style={styles.grow}>{text('dueDate', 'Delivery due date', 'YYYY-MM-DD')}</View>
-          <View style={styles.grow}>{text('dueTime', 'Due time', 'HH:MM, local time')}</View>
+          <View style={styles.grow}>{date('dueDate', 'Delivery due date', 'date')}</View>
+          <View style={styles.grow}>{date('dueTime', 'Due time', 'time', 'Local time')}</View>
         </View>
         <Controller
           control={control}

@@ -8,14 +8,18 @@ export class ApiError extends Error {
     readonly code: string,
     message: string,
     readonly fields: Record<string, string> = {},
+    // The whole answer, for errors that carry more than a message (a stale save's current draft).
+    readonly body: unknown = null,
   ) {
     super(message);
   }
 }
 
 type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+// baseVersion: the draft version an edit is based on, sent as If-Match.
+type Options = { baseVersion?: number; keepalive?: boolean };
 
-async function request<T>(method: Method, path: string, body?: unknown): Promise<T> {
+async function request<T>(method: Method, path: string, body?: unknown, options: Options = {}): Promise<T> {
   let response: Response;
   try {
     response = await fetch(path, {
@@ -26,8 +30,10 @@ async function request<T>(method: Method, path: string, body?: unknown): Promise
         // Marks our own client; the server refuses state changes without it (CSRF defence).
         'X-Sightline-Request': '1',
         ...(body !== undefined && { 'Content-Type': 'application/json' }),
+        ...(options.baseVersion !== undefined && { 'If-Match': `"${options.baseVersion}"` }),
       },
       body: body === undefined ? undefined : JSON.stringify(body),
+      keepalive: options.keepalive,
     });
   } catch {
     throw new ApiError(0, 'offline', 'Sightline cannot be reached. Check your connection and try again.');
@@ -41,6 +47,7 @@ async function request<T>(method: Method, path: string, body?: unknown): Promise
       error?.code ?? 'http_error',
       error?.message ?? `Request failed (${response.status}).`,
       error?.fields,
+      payload,
     );
   }
   return payload as T;
@@ -80,8 +87,8 @@ function upload<T>(path: string, form: FormData, onProgress: (fraction: number) 
 export const api = {
   upload,
   get: <T>(path: string) => request<T>('GET', path),
-  post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
+  post: <T>(path: string, body?: unknown, options?: Options) => request<T>('POST', path, body ?? {}, options),
   patch: <T>(path: string, body: unknown) => request<T>('PATCH', path, body),
-  put: <T>(path: string, body: unknown) => request<T>('PUT', path, body),
+  put: <T>(path: string, body: unknown, options?: Options) => request<T>('PUT', path, body, options),
   delete: <T>(path: string) => request<T>('DELETE', path),
 };

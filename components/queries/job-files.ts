@@ -1,23 +1,9 @@
-// Files attached to a job: photos, sketches and the station file.
+// Files attached to a job: removing one. Uploads go through the device queue (use-upload-queue).
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 
 import { api } from '@/components/lib/api-client';
-import type { FileKind, StoredFile } from '@/shared/files';
 
 import { invalidateJob } from './jobs';
-
-export function useFileUploadMutation(jobId: number) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ kind, file, name, onProgress }: { kind: FileKind; file: Blob; name: string; onProgress: (f: number) => void }) => {
-      const form = new FormData();
-      form.append('kind', kind);
-      form.append('file', file, name);
-      return api.upload<{ file: StoredFile }>(`/api/jobs/${jobId}/files`, form, onProgress);
-    },
-    onSuccess: () => invalidateJob(queryClient, jobId),
-  });
-}
 
 export function useFileDetachMutation(jobId: number) {
   const queryClient = useQueryClient();

@@ -1,6 +1,7 @@
 // Jobs: the list, one job's detail (its record draft, revisions, files) and its changes.
 import { keepPreviousData, type QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import { withDeviceCopy } from '@/components/device/device-copy';
 import { api } from '@/components/lib/api-client';
 import type { JobDetail, RevisionView } from '@/shared/api-types';
 import type { JobInput, JobStatus, JobSummary, Priority } from '@/shared/jobs';
@@ -33,7 +34,7 @@ export function useJobsQuery(filters: JobFilters) {
   const search = parts.length ? `?${parts.join('&')}` : '';
   return useQuery({
     queryKey: jobKeys.list(filters),
-    queryFn: async () => (await api.get<{ jobs: JobSummary[] }>(`/api/jobs${search}`)).jobs,
+    queryFn: async () => (await withDeviceCopy(`/api/jobs${search}`, () => api.get<{ jobs: JobSummary[] }>(`/api/jobs${search}`))).jobs,
     placeholderData: keepPreviousData,
   });
 }
@@ -41,7 +42,7 @@ export function useJobsQuery(filters: JobFilters) {
 export function useJobQuery(id: number) {
   return useQuery({
     queryKey: jobKeys.detail(id),
-    queryFn: () => api.get<JobDetail>(`/api/jobs/${id}`),
+    queryFn: () => withDeviceCopy(`/api/jobs/${id}`, () => api.get<JobDetail>(`/api/jobs/${id}`)),
     enabled: Number.isInteger(id) && id > 0,
   });
 }
@@ -49,7 +50,10 @@ export function useJobQuery(id: number) {
 export function useRevisionQuery(id: number, number: number | null) {
   return useQuery({
     queryKey: jobKeys.revision(id, number ?? 0),
-    queryFn: async () => (await api.get<{ revision: RevisionView }>(`/api/jobs/${id}/revisions/${number}`)).revision,
+    queryFn: async () => {
+      const path = `/api/jobs/${id}/revisions/${number}`;
+      return (await withDeviceCopy(path, () => api.get<{ revision: RevisionView }>(path))).revision;
+    },
     enabled: number !== null && number > 0,
   });
 }

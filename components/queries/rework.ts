@@ -1,6 +1,7 @@
 // Rework items of a job, the technician's answers, and disputes for managers.
 import { type QueryClient, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 
+import { withDeviceCopy } from '@/components/device/device-copy';
 import { api } from '@/components/lib/api-client';
 import type { Dispute } from '@/shared/api-types';
 import type { ReworkItemView, ReworkResponse } from '@/shared/review';
@@ -17,9 +18,10 @@ export function invalidateDisputes(queryClient: QueryClient) {
 }
 
 export function useReworkItemsQuery(jobId: number) {
+  const path = `/api/jobs/${jobId}/rework-items`;
   return useQuery({
     queryKey: reworkKeys.items(jobId),
-    queryFn: async () => (await api.get<{ items: ReworkItemView[] }>(`/api/jobs/${jobId}/rework-items`)).items,
+    queryFn: async () => (await withDeviceCopy(path, () => api.get<{ items: ReworkItemView[] }>(path))).items,
   });
 }
 

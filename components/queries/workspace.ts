@@ -3,7 +3,7 @@ import { type QueryClient, useMutation, useQuery, useQueryClient } from '@tansta
 
 import { api } from '@/components/lib/api-client';
 import type { ReviewResult } from '@/shared/api-types';
-import type { Decision, ScoreInput, Workspace } from '@/shared/review';
+import type { Decision, ReviewDraft, ReviewDraftData, ScoreInput, Workspace } from '@/shared/review';
 
 import { invalidateJobs } from './jobs';
 import { invalidateQueue } from './queue';
@@ -37,4 +37,9 @@ export function useReviewSubmitMutation(jobId: number, second: number | null) {
       api.post<ReviewResult>(second ? `/api/second-reviews/${second}/reviews` : `/api/jobs/${jobId}/reviews`, input),
     onSuccess: () => Promise.all([invalidateReviewWork(queryClient), invalidateSecondReviews(queryClient)]),
   });
+}
+
+// The reviewer's unsaved scores for their claim; the version it is based on goes as If-Match.
+export function saveReviewDraft(jobId: number, second: number | null, data: ReviewDraftData, baseVersion: number) {
+  return api.put<{ draft: ReviewDraft }>(`/api/jobs/${jobId}/review-draft${second ? `?second=${second}` : ''}`, data, { baseVersion });
 }

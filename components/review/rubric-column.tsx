@@ -18,6 +18,7 @@ import { suggestedComments } from '@/shared/station-analysis';
 
 import { CriterionRow } from './criterion-row';
 import { ScoreSummary } from './score-summary';
+import { describeReviewDraft, useReviewDraft } from './use-review-draft';
 import type { useScoreSheet } from './use-score-sheet';
 
 type Props = {
@@ -33,7 +34,9 @@ export function RubricColumn({ workspace, scores, current, onFocusCriterion, sti
   const { rubric, applicable, job } = workspace;
   const second = workspace.secondReviewId;
   const carried = workspace.previous?.carried ?? {};
-  const [decision, setDecision] = useState<Decision | undefined>();
+  const { decision, setDecision } = scores;
+  const [decided, setDecided] = useState(false);
+  const draft = useReviewDraft(workspace, { scores: scores.scoreInputs(), decision }, !decided);
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   const submit = useReviewSubmitMutation(job.id, second);
   const { entries, evaluation } = scores;
@@ -53,9 +56,11 @@ export function RubricColumn({ workspace, scores, current, onFocusCriterion, sti
     if (Object.keys(local).length) return setFieldErrors(local);
     setFieldErrors({});
     try {
+      setDecided(true);
       await submit.mutateAsync({ decision, scores: inputs });
       router.replace('/queue');
     } catch (error) {
+      setDecided(false);
       if (error instanceof ApiError) setFieldErrors(error.fields);
     }
   };
@@ -66,6 +71,24 @@ export function RubricColumn({ workspace, scores, current, onFocusCriterion, sti
         <ScoreSummary evaluation={evaluation} passMark={rubric.passMark} />
       </View>
       <Text variant="muted">{`Rubric version ${rubric.version}. Press ? for keys.`}</Text>
+      <Text variant="small" role="status" aria-live="polite">
+        {describeReviewDraft(draft.status)}
+      </Text>
+      {draft.status.kind === 'conflict' ? (
+        <Notice tone="caution">
+          Your scores for this record were also saved from another tab or machine. Keep the scores on this screen, or load the other ones.
+        </Notice>
+      ) : null}
+      {draft.status.kind === 'conflict' ? (
+        <View style={styles.row}>
+          <Button label="Keep these scores" onPress={() => draft.resolve('mine', () => undefined)} />
+          <Button
+            label="Load the other scores"
+            tone="secondary"
+            onPress={() => draft.resolve('theirs', (d) => scores.replace(d.scores, d.decision))}
+          />
+        </View>
+      ) : null}
       {rubric.criteria.map((criterion, index) => (
         <CriterionRow
           key={criterion.key}
@@ -106,4 +129,5 @@ export function RubricColumn({ workspace, scores, current, onFocusCriterion, sti
 const styles = StyleSheet.create({
   // position: sticky exists on the web build only; a phone scrolls the summary away.
   sticky: { position: 'sticky' as 'relative', top: 0, zIndex: 1 },
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
 });

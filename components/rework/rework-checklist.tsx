@@ -11,23 +11,45 @@ import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { colors, space } from '@/components/ui/theme';
 import type { StoredFile } from '@/shared/files';
+import { JOB_STATUS_LABELS, type JobStatus } from '@/shared/jobs';
 import { REWORK_RESPONSE_LABELS, REWORK_RESPONSES, type ReworkItemView, type ReworkResponse } from '@/shared/review';
 
+// What the checklist says follows the job's real state: only an open request asks for answers.
+function checklistText(status: JobStatus, open: number, total: number, editable: boolean): { title: string; text: string } {
+  if (status !== 'rework_requested') {
+    return { title: 'Last rework request', text: `${JOB_STATUS_LABELS[status]}. The answers below were given to the last rework request.` };
+  }
+  if (!editable) return { title: 'Rework requested', text: `${open} of ${total} item(s) still wait for the technician's answer.` };
+  return {
+    title: 'Rework requested',
+    text: open
+      ? `${open} of ${total} item(s) still need your answer before you can resubmit.`
+      : 'Every item is answered. Correct the record below and submit the next revision.',
+  };
+}
+
 // The reviewer's failing items, each answered by the technician before resubmitting.
-export function ReworkChecklist({ jobId, editable, files }: { jobId: number; editable: boolean; files: StoredFile[] }) {
+export function ReworkChecklist({
+  jobId,
+  status,
+  editable,
+  files,
+}: {
+  jobId: number;
+  status: JobStatus;
+  editable: boolean;
+  files: StoredFile[];
+}) {
   const items = useReworkItemsQuery(jobId);
   if (!items.data?.length) return null;
   const open = items.data.filter((i) => !i.response).length;
+  const words = checklistText(status, open, items.data.length, editable);
   return (
-    <View style={styles.box} role="region" aria-label="Rework requested">
+    <View style={styles.box} role="region" aria-label={words.title}>
       <Text variant="heading" role="heading" aria-level={2}>
-        Rework requested
+        {words.title}
       </Text>
-      <Text variant="muted">
-        {open
-          ? `${open} of ${items.data.length} item(s) still need your answer before you can resubmit.`
-          : 'Every item is answered. Correct the record below and submit the next revision.'}
-      </Text>
+      <Text variant="muted">{words.text}</Text>
       {items.data.map((item, i) => (
         <ReworkItemCard key={item.id} jobId={jobId} item={item} index={i} editable={editable} files={files} />
       ))}

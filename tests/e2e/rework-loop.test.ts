@@ -95,7 +95,7 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
   }
   await technician.getByRole('button', { name: 'Notes, expand' }).click();
   await technician.getByLabel('Notes for the reviewer').fill('Attic and hall doorway added as asked.');
-  await technician.getByText(/^Saved at/).waitFor();
+  await technician.getByText(/^Saved \d/).waitFor();
   await screenshot(technician, 'rework-answered-phone');
   await technician.getByRole('button', { name: 'Submit revision 2' }).click();
   await technician.getByText(/Resubmitted\. Latest: revision 2/).waitFor();
