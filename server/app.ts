@@ -10,6 +10,8 @@ import { passport } from './auth/passport';
 import { config } from './config';
 import { requireSameOrigin } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
+import { limitJsonDepth } from './middleware/json-depth';
+import { endStaleSessions } from './middleware/session-lifetime';
 import { sequelize } from './models';
 import { apiRouters } from './routes';
 
@@ -54,6 +56,7 @@ export function createApp(options: { webDir?: string } = {}) {
     }),
   );
   app.use(express.json({ limit: '1mb' }));
+  app.use(limitJsonDepth);
 
   app.use(
     '/api',
@@ -74,6 +77,7 @@ export function createApp(options: { webDir?: string } = {}) {
     }),
     passport.initialize(),
     passport.session(),
+    endStaleSessions,
     requireSameOrigin,
   );
 

@@ -68,6 +68,26 @@ export type JobFields = {
 // What POST /api/jobs takes.
 export type JobInput = JobFields & { technicianId: number };
 
+// The only fields a request may set on a new job; anything else in a body is ignored.
+export const JOB_INPUT_FIELDS = [
+  'claimReference',
+  'street',
+  'city',
+  'postcode',
+  'propertyType',
+  'lossType',
+  'lossDate',
+  'siteVisitDate',
+  'dueAt',
+  'priority',
+  'technicianId',
+] as const satisfies readonly (keyof JobInput)[];
+
+export function pickJobInput(body: Record<string, unknown>): JobInput {
+  const picked = Object.fromEntries(JOB_INPUT_FIELDS.map((field) => [field, body[field]]));
+  return { ...picked, siteVisitDate: picked.siteVisitDate ?? null } as JobInput;
+}
+
 export type JobSummary = JobFields & {
   id: number;
   status: JobStatus;

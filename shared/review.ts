@@ -80,7 +80,9 @@ export type Workspace = {
   previous: {
     revision: number;
     score: number | null;
-    decision: Decision;
+    // null while a blind second review of that revision is open (hidden: true).
+    decision: Decision | null;
+    hidden?: boolean;
     changes: Change[];
     items: ReworkItemView[];
     carried: Record<string, { score: number | null; stockReason: string | null; comment: string }>;

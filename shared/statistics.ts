@@ -57,6 +57,9 @@ export function cohenKappa(table: number[][], weights: null | 'linear' | 'quadra
   const p = table.map((row) => row.map((v) => v / total));
   const rows = p.map((row) => row.reduce((s, v) => s + v, 0));
   const cols = p[0].map((_, j) => p.reduce((s, row) => s + row[j], 0));
+  // With one rater always giving the same category, chance agreement is the observed one and
+  // kappa says nothing (it would read 0, "slight"): not defined.
+  if (rows.filter((r) => r > 0).length < 2 || cols.filter((c) => c > 0).length < 2) return null;
   // Disagreement weight v_ij: 0 on the diagonal.
   const v = (i: number, j: number) =>
     weights === null

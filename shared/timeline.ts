@@ -6,6 +6,7 @@ const EMAIL_KIND: Record<string, string> = {
   accepted: 'acceptance notice',
   recapture_required: 'recapture notice',
   rework_reminder: 'rework reminder',
+  review_outcome: 'review outcome notice',
 };
 
 export function describeEvent(event: Pick<TimelineEvent, 'type' | 'data'>): string {
@@ -26,6 +27,7 @@ export function describeEvent(event: Pick<TimelineEvent, 'type' | 'data'>): stri
     case 'claim_reassigned':
       return 'Claim moved to another reviewer';
     case 'reviewed':
+      if (d.hidden) return `Reviewed (revision ${d.revision}); the outcome is hidden while a blind second review is open`;
       return `Reviewed: ${DECISION_LABELS[d.decision as Decision] ?? d.decision}, score ${d.score ?? '–'} (rubric version ${d.rubricVersion}, revision ${d.revision})`;
     case 'blind_second_review':
       return `Blind second review of revision ${d.revision}`;

@@ -12,7 +12,11 @@ export function ChangesPanel({ previous, currentRevision }: { previous: NonNulla
   return (
     <View style={styles.card} role="region" aria-label="Changes since the last review">
       <Text variant="heading" role="heading" aria-level={2}>{`Resubmission: revision ${previous.revision} → ${currentRevision}`}</Text>
-      <Text variant="muted">{`Revision ${previous.revision} scored ${previous.score ?? '–'}.`}</Text>
+      <Text variant="muted">
+        {previous.hidden
+          ? `The review of revision ${previous.revision} is hidden while its blind second review is open; score this revision afresh.`
+          : `Revision ${previous.revision} scored ${previous.score ?? '–'}.`}
+      </Text>
       {previous.items.length ? <Text variant="label">Technician&apos;s answers</Text> : null}
       {previous.items.map((item) => (
         <View key={item.id} style={styles.item}>

@@ -41,7 +41,7 @@ export function ReviewerTable({ rows }: { rows: ReviewerRow[] }) {
 }
 
 export function CalibrationView({ calibration }: { calibration: Calibration }) {
-  const k = (v: number | null) => (v === null ? '–' : v.toFixed(2));
+  const k = (v: number | null) => (v === null ? 'not defined' : v.toFixed(2));
   return (
     <View style={{ gap: space.sm }}>
       <Text>{`${calibration.pairs} blind double review(s) in this period.`}</Text>

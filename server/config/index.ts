@@ -29,6 +29,8 @@ export const config = {
   trustProxy: number('TRUST_PROXY', 0),
   sessionSecret,
   sessionMaxAgeHours: number('SESSION_MAX_AGE_HOURS', 12),
+  // However active, a session ends this long after sign-in.
+  sessionAbsoluteHours: number('SESSION_ABSOLUTE_HOURS', 24),
   db: {
     host: env.DB_HOST ?? '127.0.0.1',
     port: number('DB_PORT', 3407),

@@ -17,8 +17,20 @@ export function requireSameOrigin(req: Request, _res: Response, next: NextFuncti
     return next(new HttpError(403, 'csrf_rejected', `State-changing requests must send the ${CSRF_HEADER} header.`));
   }
   const origin = req.get('origin');
-  if (origin && new URL(origin).host !== req.get('host')) {
+  if (origin !== undefined && !sameOrigin(origin, req)) {
     return next(new HttpError(403, 'csrf_rejected', 'Requests from another site are refused.'));
   }
   next();
+}
+
+// Scheme and host must both match ours; "null" (a sandboxed or file page) and anything that
+// does not parse as a URL are another site.
+function sameOrigin(origin: string, req: Request): boolean {
+  let parsed: URL;
+  try {
+    parsed = new URL(origin);
+  } catch {
+    return false;
+  }
+  return parsed.host === req.get('host') && parsed.protocol === `${req.protocol}:`;
 }

@@ -1,3 +1,5 @@
+import crypto from 'node:crypto';
+
 import type { Request, Response } from 'express';
 import { rateLimit } from 'express-rate-limit';
 
@@ -5,6 +7,14 @@ import { config } from '../config';
 import { MariaDbRateLimitStore } from './rate-limit-store';
 
 const windowMs = config.signInLimits.windowMinutes * 60_000;
+
+// The account an attempt is aimed at, folded the way MariaDB compares e-mails (case and
+// accents ignored), so Tess@… and tëss@… count against one account; hashed so that any typed
+// length fits the key column.
+export function accountKey(email: unknown): string {
+  const folded = typeof email === 'string' ? email.normalize('NFKD').replace(/\p{M}/gu, '').trim().toLowerCase() : '';
+  return folded ? crypto.createHash('sha256').update(folded).digest('hex') : 'blank';
+}
 
 function refuse(_req: Request, res: Response) {
   res.status(429).json({
@@ -34,9 +44,6 @@ export const signInLimitPerAccount = rateLimit({
   standardHeaders: false,
   legacyHeaders: false,
   store: new MariaDbRateLimitStore('signin-account'),
-  keyGenerator: (req) =>
-    String(req.body?.email ?? '')
-      .trim()
-      .toLowerCase() || 'blank',
+  keyGenerator: (req) => accountKey(req.body?.email),
   handler: refuse,
 });

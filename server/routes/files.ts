@@ -5,6 +5,12 @@ import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { openFile } from '../services/files-service';
 
+// RFC 6266: an ASCII fallback name plus the UTF-8 name, so Küche–Süd.png downloads intact.
+function contentDisposition(kind: 'inline' | 'attachment', name: string) {
+  const fallback = name.replace(/[^\w.\- ]/g, '_');
+  return `${kind}; filename="${fallback}"; filename*=UTF-8''${encodeURIComponent(name)}`;
+}
+
 export const filesRouter = Router();
 
 // The bucket is private; this is the only way to read a file, and it checks job access.
@@ -18,8 +24,9 @@ filesRouter.get(
     res.setHeader('Content-Length', String(file.sizeBytes));
     res.setHeader('Cache-Control', 'private, max-age=300');
     res.setHeader('X-Content-Type-Options', 'nosniff');
-    const inline = file.contentType.startsWith('image/') || file.contentType === 'application/pdf';
-    res.setHeader('Content-Disposition', `${inline ? 'inline' : 'attachment'}; filename="${file.originalName.replace(/[^\w.\- ]/g, '_')}"`);
+    // Images show in the page; a PDF (which can carry scripts) and anything else download.
+    const inline = file.contentType.startsWith('image/');
+    res.setHeader('Content-Disposition', contentDisposition(inline ? 'inline' : 'attachment', file.originalName));
     stream.pipe(res);
   },
 );

@@ -4,9 +4,9 @@ import multer from 'multer';
 
 import type { CaptureRecord } from '../../shared/capture-record';
 import { FILE_KINDS, type FileKind, fileTooLargeMessage } from '../../shared/files';
-import { JOB_STATUSES, type JobStatus } from '../../shared/jobs';
+import { JOB_STATUSES, type JobStatus, pickJobInput } from '../../shared/jobs';
 import { config } from '../config';
-import { HttpError } from '../errors';
+import { HttpError, invalid } from '../errors';
 import { requireBaseVersion } from '../middleware/base-version';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
@@ -42,7 +42,7 @@ jobsRouter.get(
 );
 
 jobsRouter.post('/', jobManagers, validate(...jobCreateRules), async (req, res) => {
-  res.status(201).json({ job: await createJob(req.user!, { siteVisitDate: null, ...req.body }) });
+  res.status(201).json({ job: await createJob(req.user!, pickJobInput(req.body)) });
 });
 
 jobsRouter.get('/:id', anyJobReader, validate(jobId), async (req, res) => {
@@ -72,7 +72,13 @@ jobsRouter.get(
 );
 
 // Uploads are held in memory only long enough to check and hash them, then go to S3.
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: config.uploadMaxBytes, files: 1 } });
+// defParamCharset exists in multer 2 but not yet in its type declarations.
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: config.uploadMaxBytes, files: 1, fields: 5, parts: 8 },
+  // File names are UTF-8 in every browser today; busboy's default would mangle Küche–Süd.png.
+  defParamCharset: 'utf8',
+} as multer.Options);
 const singleFile = (
   req: Parameters<ReturnType<typeof upload.single>>[0],
   res: Parameters<ReturnType<typeof upload.single>>[1],
@@ -82,8 +88,21 @@ const singleFile = (
     if (err instanceof multer.MulterError && err.code === 'LIMIT_FILE_SIZE') {
       return next(new HttpError(413, 'too_large', tooLargeMessage(), { file: tooLargeMessage() }));
     }
+    // Two files, a file under another field name, too many parts, or a body cut short.
+    if (err instanceof multer.MulterError)
+      return next(invalid({ [err.field ?? 'file']: MULTIPART_PROBLEMS[err.code] ?? 'Send one file in the field "file"' }));
+    if (err instanceof Error && /Unexpected end of form|Malformed part header|Multipart: Boundary not found/.test(err.message)) {
+      return next(invalid({ file: 'The upload was cut short or is not a valid form; send it again.' }));
+    }
     next(err);
   });
+
+const MULTIPART_PROBLEMS: Partial<Record<string, string>> = {
+  LIMIT_FILE_COUNT: 'Send one file at a time',
+  LIMIT_UNEXPECTED_FILE: 'Send the file in the field "file"',
+  LIMIT_PART_COUNT: 'Too many parts in the form',
+  LIMIT_FIELD_COUNT: 'Too many fields in the form',
+};
 
 // Refused from the declared length before a byte of the body is read: a file that can never
 // pass is not uploaded in full first. Multipart framing adds a little, hence the allowance.

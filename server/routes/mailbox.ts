@@ -6,11 +6,14 @@ import { requireAuth, requireRole } from '../middleware/require-auth';
 
 export const mailboxRouter = Router();
 
-// The local fake SMTP server's messages: always for admins, for everyone in development.
+// The local fake SMTP server's messages: all of them for admins. In development
+// (MAILBOX_OPEN) other people may look too, but each sees only mail addressed to them.
 const mailboxAccess = (req: Request, res: Response, next: NextFunction) =>
   config.mailboxOpenToAll ? requireAuth(req, res, next) : requireRole('admin')(req, res, next);
 
-mailboxRouter.get('/', mailboxAccess, async (_req, res) => {
+type Caught = { to: string[] };
+
+mailboxRouter.get('/', mailboxAccess, async (req, res) => {
   let response: globalThis.Response;
   try {
     response = await fetch(`${config.mailboxUrl}/messages`);
@@ -18,5 +21,8 @@ mailboxRouter.get('/', mailboxAccess, async (_req, res) => {
     throw new HttpError(503, 'mailbox_unavailable', 'The local mailbox cannot be reached. Is the fake SMTP server running?');
   }
   if (!response.ok) throw new HttpError(503, 'mailbox_unavailable', 'The local mailbox did not answer.');
-  res.json({ messages: await response.json() });
+  const messages = (await response.json()) as Caught[];
+  const me = req.user!;
+  const mine = (m: Caught) => m.to.some((address) => address.toLowerCase() === me.email.toLowerCase());
+  res.json({ messages: me.role === 'admin' ? messages : messages.filter(mine) });
 });

@@ -15,7 +15,7 @@ sessionRouter.post(
   signInLimitPerIp,
   signInLimitPerAccount,
   validate(
-    body('email', 'Enter a valid e-mail address').isString().trim().isEmail(),
+    body('email', 'Enter a valid e-mail address').isString().isLength({ max: 254 }).trim().isEmail(),
     body('password', 'Enter your password').isString().isLength({ min: 1, max: 200 }),
   ),
   (req, res, next) => {
@@ -24,6 +24,7 @@ sessionRouter.post(
       if (!user) return next(new HttpError(401, 'sign_in_failed', SIGN_IN_FAILED));
       req.login(user, (loginErr) => {
         if (loginErr) return next(loginErr);
+        req.session.signedInAt = Date.now();
         res.status(200).json({ user });
       });
     })(req, res, next);

@@ -40,7 +40,8 @@ function send(req: Request, res: Response, name: string, body: unknown, rows: ()
   if (req.query.format === 'csv') {
     res.setHeader('Content-Type', 'text/csv; charset=utf-8');
     res.setHeader('Content-Disposition', `attachment; filename="sightline-${name}.csv"`);
-    res.send(Papa.unparse(rows()));
+    // A cell starting with = + - @ is written as text, so a spreadsheet never runs it as a formula.
+    res.send(Papa.unparse(rows(), { escapeFormulae: true }));
     return;
   }
   res.json(body);

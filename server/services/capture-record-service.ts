@@ -5,8 +5,9 @@ import { type CaptureRecord, emptyCaptureRecord } from '../../shared/capture-rec
 import { resumeDueClock } from '../../shared/due-clock';
 import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
 import { checkCaptureRecord } from '../../shared/pre-submit-checks';
+import { inTransaction } from '../db';
 import { conflict, invalid, notFound, staleVersion } from '../errors';
-import { CaptureDraft, CaptureRevision, sequelize, StoredFile } from '../models';
+import { CaptureDraft, CaptureRevision, StoredFile } from '../models';
 import { recordEvent } from './audit-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 import { assertReworkAnswered } from './rework-service';
@@ -55,7 +56,7 @@ async function writeDraft(jobId: number, record: CaptureRecord, baseVersion: num
 // Autosave: accepts an incomplete record (required facts are checked at submit), but never
 // a malformed one (the route validates types, ranges and enums first).
 export async function saveDraft(actor: Actor, jobId: number, record: CaptureRecord, baseVersion: number) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
     assertAssignedTechnician(actor, job);
     assertEditable(job.status);
@@ -66,7 +67,7 @@ export async function saveDraft(actor: Actor, jobId: number, record: CaptureReco
 
 // Freezes the record as the next immutable revision and hands the job to review.
 export async function submitRecord(actor: Actor, jobId: number, record: CaptureRecord, baseVersion: number) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
     assertAssignedTechnician(actor, job);
     assertEditable(job.status);

@@ -2,8 +2,9 @@ import { Op, type Transaction } from 'sequelize';
 
 import { claimExpiresAt } from '../../shared/review-rules';
 import { config } from '../config';
+import { inTransaction } from '../db';
 import { conflict, HttpError, invalid, notFound } from '../errors';
-import { Job, sequelize, User } from '../models';
+import { Job, User } from '../models';
 import { recordEvent } from './audit-service';
 import { activeClaim } from './queue-service';
 import { dropReviewDraft } from './review-draft-service';
@@ -15,7 +16,7 @@ const CLAIMABLE: Job['status'][] = ['submitted', 'resubmitted', 'in_review'];
 // One conditional UPDATE decides the race: it only matches while nobody else holds a live
 // claim, so of any number of simultaneous claims exactly one changes the row.
 export async function claimJob(actor: Actor, jobId: number) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const now = new Date();
     const [changed] = await Job.update(
       { claimedById: actor.id, claimedAt: now, claimExpiresAt: claimExpiresAt(now, config.review.claimMinutes), status: 'in_review' },
@@ -42,7 +43,7 @@ export async function claimJob(actor: Actor, jobId: number) {
 }
 
 export async function releaseClaim(actor: Actor, jobId: number) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const job = await Job.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!job) throw notFound('Job');
     if (!activeClaim(job) || (job.claimedById !== actor.id && actor.role !== 'manager')) {
@@ -65,7 +66,7 @@ async function releaseRow(job: Job, transaction: Transaction) {
 export async function reassignClaims(actor: Actor, input: { toReviewerId: number; jobIds?: number[]; fromReviewerId?: number }) {
   const target = await User.findByPk(input.toReviewerId);
   if (!target || target.role !== 'reviewer' || !target.active) throw invalid({ toReviewerId: 'Choose an active reviewer' });
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const now = new Date();
     const where = input.jobIds?.length
       ? { id: { [Op.in]: input.jobIds } }

@@ -25,9 +25,18 @@ function looksLikeCsv(buffer: Buffer) {
   return firstLine.includes(',') && text.length > 0;
 }
 
+// Files belong to a record still being worked on; once a job is accepted or sent for a new
+// visit, its files are part of what was reviewed and stay as they are.
+function assertFilesEditable(status: string) {
+  if (status === 'accepted' || status === 'recapture_required') {
+    throw new HttpError(409, 'conflict', 'Files cannot be added to or removed from a job that has been accepted or sent for recapture.');
+  }
+}
+
 export async function uploadFile(actor: Actor, jobId: number, kind: FileKind, upload: { originalname: string; buffer: Buffer }) {
   const job = await findJobFor(actor, jobId);
   assertAssignedTechnician(actor, job);
+  assertFilesEditable(job.status);
   const contentType = await sniffContentType(upload.buffer);
   if (!contentType || !ACCEPTED_TYPES[kind].includes(contentType)) {
     throw invalid({
@@ -72,6 +81,7 @@ export async function openFile(actor: Actor, fileId: number) {
 export async function detachFile(actor: Actor, jobId: number, fileId: number) {
   const job = await findJobFor(actor, jobId);
   assertAssignedTechnician(actor, job);
+  assertFilesEditable(job.status);
   const file = await StoredFile.findOne({ where: { id: fileId, jobId, detachedAt: null } });
   if (!file) throw notFound('File');
   await file.update({ detachedAt: new Date() });

@@ -3,9 +3,10 @@ import { col, fn, Op, type WhereOptions } from 'sequelize';
 import type { JobDetail } from '../../shared/api-types';
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import { effectiveDueAt } from '../../shared/due-clock';
-import type { JobInput, JobStatus, JobSummary } from '../../shared/jobs';
+import { type JobInput, type JobStatus, type JobSummary, pickJobInput } from '../../shared/jobs';
+import { inTransaction } from '../db';
 import { HttpError, invalid } from '../errors';
-import { CaptureDraft, CaptureRevision, Job, sequelize, StoredFile, User } from '../models';
+import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
 
@@ -69,11 +70,11 @@ export async function createJob(actor: Actor, input: JobInput): Promise<JobSumma
   if (await Job.findOne({ where: { claimReference: input.claimReference } })) {
     throw new HttpError(409, 'conflict', 'A job with that claim reference already exists.', { claimReference: 'Already in use' });
   }
-  const job = await sequelize.transaction(async (transaction) => {
+  const job = await inTransaction(async (transaction) => {
     const dueAt = new Date(input.dueAt);
     const created = await Job.create(
       {
-        ...input,
+        ...pickJobInput(input),
         dueAt,
         effectiveDueAt: dueAt,
         createdById: actor.id,
@@ -100,7 +101,7 @@ export async function updateJob(
   changes: Partial<Pick<JobInput, 'technicianId' | 'dueAt' | 'priority' | 'siteVisitDate'>>,
 ) {
   if (changes.technicianId !== undefined) await assertActiveTechnician(changes.technicianId);
-  await sequelize.transaction(async (transaction) => {
+  await inTransaction(async (transaction) => {
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
     const { dueAt, ...rest } = changes;
     const previousTechnician = job.technicianId;

@@ -4,9 +4,10 @@ import type { Transporter } from 'nodemailer';
 import { Op, type Transaction } from 'sequelize';
 
 import { config } from '../config';
+import { inTransaction } from '../db';
 import type { Email } from '../mail/templates';
 import { deliver } from '../mail/transport';
-import { OutboxMessage, sequelize } from '../models';
+import { OutboxMessage } from '../models';
 import { recordEvent } from './audit-service';
 
 export async function enqueueEmail(
@@ -69,7 +70,7 @@ export async function sendPendingEmails(transport: Transporter, instanceId = con
         text: message.textBody,
         html: message.htmlBody,
       });
-      await sequelize.transaction(async (transaction) => {
+      await inTransaction(async (transaction) => {
         await message.update(
           { status: 'sent', sentAt: new Date(), attempts: message.attempts + 1, lastError: null, lockedBy: null, lockedUntil: null },
           { transaction },
@@ -79,7 +80,7 @@ export async function sendPendingEmails(transport: Transporter, instanceId = con
       sent += 1;
     } catch (error) {
       const attempts = message.attempts + 1;
-      await sequelize.transaction(async (transaction) => {
+      await inTransaction(async (transaction) => {
         await message.update(
           {
             attempts,

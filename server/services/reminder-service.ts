@@ -3,8 +3,9 @@ import { literal, Op, UniqueConstraintError } from 'sequelize';
 
 import { reworkDueAt, reworkOverdueCutoff } from '../../shared/due-clock';
 import { config } from '../config';
+import { inTransaction } from '../db';
 import { reworkReminderEmail } from '../mail/templates';
-import { Job, ReworkItem, sequelize, User } from '../models';
+import { Job, ReworkItem, User } from '../models';
 import { jobFacts } from './decision-email-service';
 import { enqueueEmail } from './outbox-service';
 
@@ -33,7 +34,7 @@ export async function queueOverdueReworkReminders(now = new Date()) {
     const technician = await User.findByPk(job.technicianId);
     if (!technician) continue;
     try {
-      await sequelize.transaction(async (transaction) => {
+      await inTransaction(async (transaction) => {
         await enqueueEmail(transaction, {
           ...reworkReminderEmail(jobFacts(job), reworkDueAt(job.pausedAt!, config.reworkHours), open),
           jobId: job.id,

@@ -3,8 +3,9 @@
 import { Op, type Transaction } from 'sequelize';
 
 import type { ReviewDraft as ReviewDraftView, ReviewDraftData } from '../../shared/review';
+import { inTransaction } from '../db';
 import { conflict, notFound, staleVersion } from '../errors';
-import { Job, ReviewDraft, SecondReview, sequelize } from '../models';
+import { Job, ReviewDraft, SecondReview } from '../models';
 
 type Actor = Express.User;
 
@@ -53,7 +54,7 @@ export async function saveReviewDraft(
   data: ReviewDraftData,
   baseVersion: number,
 ) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const revision = await claimedRevision(actor, jobId, secondReviewId, transaction);
     const key = draftKeyFor(jobId, secondReviewId);
     const existing = await ReviewDraft.findByPk(key, { transaction, lock: transaction.LOCK.UPDATE });

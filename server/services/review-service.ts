@@ -8,9 +8,11 @@ import { carriesOver, diffRevisions } from '../../shared/revision-diff';
 import { type Criterion, scaleMax } from '../../shared/rubric';
 import { evaluate, isBelowFullMarks } from '../../shared/scoring';
 import { config } from '../config';
+import { inTransaction } from '../db';
 import { conflict, forbidden, invalid, notFound } from '../errors';
-import { CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, sequelize, User } from '../models';
+import { CaptureRevision, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, User } from '../models';
 import { recordEvent } from './audit-service';
+import { hiddenFirstReviews } from './blind-review-service';
 import { assertHoldsClaim } from './claims-service';
 import { queueDecisionEmail } from './decision-email-service';
 import { toQueueRow } from './queue-service';
@@ -70,8 +72,9 @@ export async function getWorkspace(actor: Actor, jobId: number, secondReviewId: 
     secondReviewId,
     secondClaimedByMe,
     draft,
-    // A blind second reviewer sees nothing of earlier reviews.
-    previous: secondReviewId === null ? await previousContext(jobId, number) : null,
+    // A blind second reviewer sees nothing of earlier reviews; nor does any other reviewer see
+    // a first review whose blind second review is still open.
+    previous: secondReviewId === null ? blindTo(await previousContext(jobId, number), await hiddenFirstReviews(actor, jobId)) : null,
   };
 }
 
@@ -84,7 +87,7 @@ type ReviewInput = { decision: Decision; scores: ScoreInput[] };
 // Scores, decision, job state, rework items, the timeline event and the calibration draw:
 // all in one transaction, so a review is either wholly recorded or not at all.
 export async function submitReview(actor: Actor, jobId: number, input: ReviewInput, random: () => number = Math.random) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const job = await Job.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!job) throw notFound('Job');
     assertHoldsClaim(actor, job);
@@ -167,7 +170,8 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
       decidedAt: now,
     });
 
-    const sampled = input.decision === 'accept' && shouldSampleSecondReview(config.review.secondReviewShare, random);
+    // Drawn from every first decision, so calibration sees rework and recapture calls too.
+    const sampled = shouldSampleSecondReview(config.review.secondReviewShare, random);
     if (sampled) {
       await SecondReview.create(
         {
@@ -250,6 +254,11 @@ export async function carriedOverScores(jobId: number, currentRevision: number, 
   return Object.fromEntries(scores.filter((s) => carriesOver(s.criterionKey, changes)).map((s) => [s.criterionKey, s.score]));
 }
 
+function blindTo(previous: Awaited<ReturnType<typeof previousContext>>, hidden: Set<number>) {
+  if (!previous || !hidden.has(previous.revision)) return previous;
+  return { ...previous, score: null, decision: null, items: [], carried: {}, hidden: true };
+}
+
 export async function previousContext(jobId: number, currentRevision: number) {
   const previous = await previousReview(jobId, currentRevision);
   if (!previous) return null;
@@ -320,7 +329,7 @@ export async function claimSecondReview(actor: Actor, secondReviewId: number) {
 // The second reviewer scores blind: the first score is never sent, and the job's state
 // does not change. The pair feeds the calibration trend.
 export async function submitSecondReview(actor: Actor, secondReviewId: number, input: ReviewInput) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const second = await SecondReview.findByPk(secondReviewId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!second) throw notFound('Second review');
     if (second.firstReviewerId === actor.id) throw forbidden('A blind second review must be made by another reviewer.');

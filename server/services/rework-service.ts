@@ -2,9 +2,11 @@ import { Op, type Transaction } from 'sequelize';
 
 import type { Dispute } from '../../shared/api-types';
 import type { ReworkItemView, ReworkResponse, TimelineEvent } from '../../shared/review';
+import { inTransaction } from '../db';
 import { conflict, invalid, notFound } from '../errors';
-import { AuditEvent, Job, Review, ReworkItem, sequelize, StoredFile, User } from '../models';
+import { AuditEvent, Job, Review, ReworkItem, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
+import { DECISION_EMAIL_KINDS, hiddenFirstReviews } from './blind-review-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 
 type Actor = Express.User;
@@ -42,7 +44,7 @@ export async function answerReworkItem(
   itemId: number,
   answer: { response: ReworkResponse; note: string; fileIds?: number[] },
 ) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const item = await ReworkItem.findByPk(itemId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!item) throw notFound('Rework item');
     const job = await findJobFor(actor, item.jobId, { transaction });
@@ -94,7 +96,7 @@ export async function listOpenDisputes(): Promise<Dispute[]> {
 }
 
 export async function decideDispute(actor: Actor, itemId: number, decision: { outcome: 'upheld' | 'withdrawn'; note: string }) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const item = await ReworkItem.findByPk(itemId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!item || item.response !== 'disputed') throw notFound('Disputed item');
     if (item.disputeOutcome) throw conflict('This dispute has already been decided.');
@@ -116,6 +118,11 @@ export async function decideDispute(actor: Actor, itemId: number, decision: { ou
   });
 }
 
+function withoutRecipients(data: Record<string, unknown>) {
+  const { to: _to, ...rest } = data;
+  return rest;
+}
+
 export async function jobTimeline(actor: Actor, jobId: number): Promise<TimelineEvent[]> {
   await findJobFor(actor, jobId);
   const events = await AuditEvent.findAll({
@@ -123,11 +130,23 @@ export async function jobTimeline(actor: Actor, jobId: number): Promise<Timeline
     include: [{ model: User, as: 'actor', attributes: ['name'] }],
     order: [['id', 'ASC']],
   });
-  return events.map((e) => ({
-    id: Number(e.id),
-    type: e.type,
-    data: e.data as Record<string, unknown>,
-    createdAt: e.createdAt.toISOString(),
-    actor: (e.get('actor') as User | null)?.name ?? null,
-  }));
+  // Only managers and admins see whom an e-mail went to; others see that it went.
+  const showRecipients = actor.role === 'manager' || actor.role === 'admin';
+  const hidden = await hiddenFirstReviews(actor, jobId);
+  const reviewedRevision = new Map(
+    events.filter((e) => e.type === 'reviewed').map((e) => [Number(e.id), Number((e.data as { revision?: number }).revision)]),
+  );
+  let blindFrom = Number.POSITIVE_INFINITY;
+  return events.map((e) => {
+    let data = showRecipients ? (e.data as Record<string, unknown>) : withoutRecipients(e.data as Record<string, unknown>);
+    let actorName = (e.get('actor') as User | null)?.name ?? null;
+    if (e.type === 'reviewed' && hidden.has(reviewedRevision.get(Number(e.id)) ?? -1)) {
+      blindFrom = Number(e.id);
+      data = { revision: data.revision, rubricVersion: data.rubricVersion, hidden: true };
+      actorName = null;
+    } else if (Number(e.id) > blindFrom && e.type.startsWith('email_') && DECISION_EMAIL_KINDS.has(String(data.kind))) {
+      data = { ...data, kind: 'review_outcome' };
+    }
+    return { id: Number(e.id), type: e.type, data, createdAt: e.createdAt.toISOString(), actor: actorName };
+  });
 }

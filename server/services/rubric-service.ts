@@ -1,8 +1,9 @@
 import type { Transaction } from 'sequelize';
 
 import type { Rubric as RubricView, RubricDefinition } from '../../shared/rubric';
+import { inTransaction } from '../db';
 import { HttpError } from '../errors';
-import { Rubric, sequelize } from '../models';
+import { Rubric } from '../models';
 
 export function toRubricView(rubric: Rubric): RubricView {
   return {
@@ -27,7 +28,7 @@ export async function listRubrics() {
 
 // Saving never edits a version: it adds the next one, so reviews keep the version they used.
 export async function createRubricVersion(actorId: number, definition: RubricDefinition) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const latest = await Rubric.findOne({ order: [['version', 'DESC']], transaction, lock: transaction.LOCK.UPDATE });
     const rubric = await Rubric.create(
       { version: (latest?.version ?? 0) + 1, passMark: definition.passMark, criteria: definition.criteria, createdById: actorId },

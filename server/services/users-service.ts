@@ -2,8 +2,9 @@ import bcrypt from 'bcryptjs';
 
 import type { SessionUser, UserRow } from '../../shared/api-types';
 import type { Role } from '../../shared/roles';
+import { inTransaction } from '../db';
 import { conflict, HttpError, notFound } from '../errors';
-import { sequelize, Session, User } from '../models';
+import { Session, User } from '../models';
 
 const BCRYPT_ROUNDS = 10;
 // Compared against when the e-mail is unknown, so both paths take the same time.
@@ -58,7 +59,7 @@ export async function updateUser(actorId: number, id: number, changes: { role?: 
   if (actorId === id && (changes.active === false || (changes.role && changes.role !== 'admin'))) {
     throw conflict('You cannot deactivate yourself or remove your own admin role.');
   }
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(async (transaction) => {
     const user = await User.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!user) throw notFound('User');
     if (changes.role !== undefined) user.role = changes.role;

@@ -1,5 +1,6 @@
 import { config } from '../config';
 import { createTransport } from '../mail/transport';
+import { purgeExpired } from '../services/maintenance-service';
 import { sendPendingEmails } from '../services/outbox-service';
 import { queueOverdueReworkReminders } from '../services/reminder-service';
 
@@ -17,6 +18,7 @@ export function startOutboxWorker() {
       if (Date.now() - lastReminderCheck >= 60_000) {
         lastReminderCheck = Date.now();
         await queueOverdueReworkReminders();
+        await purgeExpired();
       }
       await sendPendingEmails(transport);
     } catch (error) {

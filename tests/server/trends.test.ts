@@ -190,9 +190,10 @@ describe('GET /api/trends/calibration', () => {
     const { agent } = await signedInAgent(app, 'manager');
     const c = (await agent.get(`/api/trends/calibration?${PERIOD}`)).body;
     expect(c.pairs).toBe(2);
-    // Decisions: (accept, accept) and (accept, rework): p_o 0.5, p_e 1 × 0.5 = 0.5 → κ 0, "Slight".
-    expect(c.decisions.kappa).toBeCloseTo(0, 10);
-    expect(c.decisions.band).toBe('Slight');
+    // Decisions: (accept, accept) and (accept, rework): the first reviewer used one category only,
+    // so p_o = p_e = 0.5 and the formula's 0 ("slight") would mean nothing: kappa is not defined.
+    expect(c.decisions.kappa).toBeNull();
+    expect(c.decisions.band).toBeNull();
     expect(c.decisions.table[0]).toEqual([1, 1, 0]);
     // Coverage scores (4, 4) and (4, 3): linear weights give observed and expected disagreement both 0.125 → κw 0.
     expect(c.criterionScores.kappa).toBeCloseTo(0, 10);

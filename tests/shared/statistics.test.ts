@@ -111,6 +111,24 @@ describe("Cohen's kappa", () => {
     expect(cohenKappa(table, 'linear')!.kappa).toBeCloseTo(0.4701, 4);
   });
 
+  it('is not defined when one rater used a single category (a table with one non-empty row)', () => {
+    // Every first decision "accept", the second reviewer sometimes "rework": p_o = p_e, so the
+    // formula gives 0 ("slight") though the table cannot measure agreement at all.
+    expect(
+      cohenKappa([
+        [45, 5, 0],
+        [0, 0, 0],
+        [0, 0, 0],
+      ]),
+    ).toBeNull();
+    expect(
+      cohenKappa([
+        [45, 0],
+        [5, 0],
+      ]),
+    ).toBeNull();
+  });
+
   it('names the Landis & Koch (1977) bands', () => {
     expect([-0.1, 0.1, 0.3, 0.5, 0.7, 0.9].map(landisKoch)).toEqual([
       'Poor',
