@@ -8,9 +8,11 @@ import { useState } from 'react';
 import { View } from 'react-native';
 
 import { registerServiceWorker } from '@/components/device/register-service-worker';
+import { installFocusStyle } from '@/components/ui/focus-style';
 import { colors } from '@/components/ui/theme';
 
 registerServiceWorker();
+installFocusStyle();
 
 // Fonts, the query client and the page frame. Navigation decisions live in the group layouts.
 export default function RootLayout() {

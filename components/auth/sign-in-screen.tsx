@@ -8,7 +8,7 @@ import { SignInForm } from './sign-in-form';
 export function SignInScreen() {
   return (
     <ScrollView contentContainerStyle={styles.page}>
-      <View style={styles.card}>
+      <View style={styles.card} role="main">
         <Text variant="title" role="heading" aria-level={1}>
           Sightline
         </Text>

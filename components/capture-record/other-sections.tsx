@@ -8,7 +8,7 @@ import { ChoiceField } from '@/components/ui/choice-field';
 import { Notice } from '@/components/ui/notice';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
-import { space } from '@/components/ui/theme';
+import { colors, space } from '@/components/ui/theme';
 import { CAMERA_CLASS_LABELS, CAMERA_CLASSES, GLAZING_FLAGGED, type Hazard, HAZARD_LABELS, HAZARDS } from '@/shared/capture-record';
 import type { LengthUnit } from '@/shared/units';
 
@@ -90,7 +90,7 @@ export function ProcessingSection() {
             />
             {field.value.confirmedAt ? <Text variant="muted">{`Confirmed ${formatDateTime(field.value.confirmedAt)}`}</Text> : null}
             {errors['processing.confirmed'] ? (
-              <Text role="alert" style={{ color: '#B42318' }}>
+              <Text role="alert" style={{ color: colors.fail }}>
                 {errors['processing.confirmed']}
               </Text>
             ) : null}

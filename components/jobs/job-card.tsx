@@ -10,7 +10,8 @@ import { StatusBadge } from './status-badge';
 
 export function JobCard({ job }: { job: JobSummary }) {
   return (
-    <Link href={`/jobs/${job.id}` as never} aria-label={`Job ${job.claimReference}, ${job.street}`} style={styles.link}>
+    // The link's name is its visible text: claim, state, address, loss and due time.
+    <Link href={`/jobs/${job.id}` as never} style={styles.link}>
       <View style={styles.card}>
         <View style={styles.top}>
           <Text style={styles.claim}>{job.claimReference}</Text>

@@ -1,6 +1,7 @@
 import { useEffect, useRef } from 'react';
 import { Pressable, StyleSheet, TextInput, View } from 'react-native';
 
+import { chooseOnKeys } from '@/components/lib/press-keys';
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
@@ -34,9 +35,15 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
         ];
   const needsComment = isBelowFullMarks(criterion, entry.score);
   const ref = useRef<View>(null);
-  // Keyboard scoring moves the current criterion; keep it on screen (web only: a DOM node).
+  // Focus and the highlighted criterion are one cursor: j/k move focus here, and Tab into the
+  // row (onFocus below) makes it the current one, so a digit scores what has focus.
   useEffect(() => {
-    if (current) (ref.current as unknown as { scrollIntoView?: (o: object) => void } | null)?.scrollIntoView?.({ block: 'nearest' });
+    if (!current) return;
+    const node = ref.current as unknown as HTMLElement | null;
+    if (!node?.querySelector) return;
+    node.scrollIntoView?.({ block: 'nearest' });
+    if (!node.contains(document.activeElement))
+      (node.querySelector<HTMLElement>('[role="radio"][aria-checked="true"], [role="radio"]') ?? node).focus();
   }, [current]);
 
   return (
@@ -46,8 +53,9 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
       role="group"
       aria-label={criterion.title}
       aria-current={current ? 'step' : undefined}
+      {...({ tabIndex: -1, onFocus } as object)}
     >
-      <Pressable onPress={onFocus} accessibilityLabel={`Go to ${criterion.title}`} style={styles.head}>
+      <View style={styles.head}>
         <Text variant="label" style={{ flexShrink: 1 }}>
           {criterion.title}
         </Text>
@@ -55,7 +63,7 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
           {criterion.critical ? <Badge label="Critical" tone="fail" /> : null}
           <Badge label={`Weight ${criterion.weight}`} />
         </View>
-      </Pressable>
+      </View>
       <Text variant="muted">{criterion.guidance}</Text>
       {!applies ? (
         <Text style={{ fontFamily: fonts.semibold }}>Not applicable to this record: left out of the score.</Text>
@@ -74,6 +82,10 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
                     onFocus();
                     onChange({ ...entry, score: choice.value });
                   }}
+                  {...chooseOnKeys(() => {
+                    onFocus();
+                    onChange({ ...entry, score: choice.value });
+                  })}
                   style={[styles.choice, selected && styles.choiceSelected]}
                 >
                   <Text style={[styles.choiceText, selected && { color: colors.surface }]}>{choice.short}</Text>
@@ -103,6 +115,7 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
                         aria-checked={selected}
                         accessibilityLabel={reason}
                         onPress={() => onChange({ ...entry, stockReason: selected ? null : reason })}
+                        {...chooseOnKeys(() => onChange({ ...entry, stockReason: selected ? null : reason }))}
                         style={[styles.reason, selected && styles.choiceSelected]}
                       >
                         <Text variant="small" style={selected ? { color: colors.surface } : undefined}>
@@ -181,6 +194,6 @@ const styles = StyleSheet.create({
     color: colors.ink,
     backgroundColor: colors.surface,
   },
-  suggestions: { backgroundColor: '#FBF3EE', borderRadius: 4, padding: space.sm, gap: 2 },
+  suggestions: { backgroundColor: colors.suggestion, borderRadius: 4, padding: space.sm, gap: 2 },
   commentMissing: { borderColor: colors.rework, borderWidth: 2 },
 });

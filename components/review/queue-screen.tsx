@@ -112,6 +112,7 @@ export function QueueScreen() {
         emptyText={queue.isPending ? 'Loading the queue…' : 'Nothing waiting with these filters.'}
         getRowId={(r) => String(r.id)}
         onRowPress={open}
+        onRowFocus={(row) => setSelected(Math.max(rows.indexOf(row), 0))}
         selectedRowId={rows[selected] ? String(rows[selected].id) : null}
         sorting={sorting}
         onSortingChange={(next) =>

@@ -71,7 +71,7 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
 
   return (
     <View style={styles.phoneRoot}>
-      <View style={styles.header}>
+      <View style={styles.header} role="banner">
         <Text style={styles.brand}>Sightline</Text>
         <View style={styles.headerRight}>
           {identity}
@@ -104,17 +104,17 @@ const styles = StyleSheet.create({
   main: { flex: 1 },
   brand: { fontFamily: fonts.bold, fontSize: 20, color: colors.paper, letterSpacing: 0.5 },
   sideLink: { paddingHorizontal: space.md, borderRadius: 6, borderLeftWidth: 4, borderLeftColor: 'transparent' },
-  sideLinkActive: { backgroundColor: '#2A3544', borderLeftColor: colors.accent },
+  sideLinkActive: { backgroundColor: colors.sidebarActive, borderLeftColor: colors.accent },
   tabBar: { flexDirection: 'row', borderTopWidth: 1, borderTopColor: colors.line, backgroundColor: colors.surface },
   tab: { flex: 1, minHeight: 56, justifyContent: 'center', borderTopWidth: 3, borderTopColor: 'transparent' },
   tabActive: { borderTopColor: colors.accent },
   navText: { fontFamily: fonts.semibold, fontSize: 15, paddingVertical: space.sm },
   tabText: { textAlign: 'center', alignSelf: 'stretch', paddingVertical: space.md, color: colors.muted },
   tabTextActive: { color: colors.accent },
-  sideText: { color: '#C9CED6' },
+  sideText: { color: colors.sidebarText },
   sideTextActive: { color: colors.paper },
   userName: { fontFamily: fonts.semibold, fontSize: 14, color: colors.paper },
-  userRole: { fontFamily: fonts.regular, fontSize: 13, color: '#C9CED6' },
+  userRole: { fontFamily: fonts.regular, fontSize: 13, color: colors.sidebarText },
   signOut: {
     borderWidth: 1,
     borderColor: colors.paper,

@@ -169,6 +169,6 @@ export function StationPlot({ analysis, units, keyboard = false }: { analysis: S
 }
 
 const styles = StyleSheet.create({
-  frame: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, backgroundColor: '#FBFAF7', alignSelf: 'flex-start' },
+  frame: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, backgroundColor: colors.plot, alignSelf: 'flex-start' },
   controls: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
 });

@@ -8,6 +8,8 @@ import { Text } from '@/components/ui/text';
 import { colors, fonts } from '@/components/ui/theme';
 import type { ParetoBar } from '@/shared/trends';
 
+import { ChartReader, READ_HINT } from './chart-reader';
+
 // Most frequent shortfalls: bars by count, and the cumulative share as a line.
 export function ParetoChart({ bars, title, maxWidth }: { bars: ParetoBar[]; title: string; maxWidth?: number }) {
   const { width: screen } = useWindowDimensions();
@@ -35,54 +37,55 @@ export function ParetoChart({ bars, title, maxWidth }: { bars: ParetoBar[]; titl
   const shown = picked !== null ? top[picked] : null;
   return (
     <View>
-      <Svg width={width} height={height} accessibilityLabel={title}>
-        {top.map((b, i) => (
-          <G key={b.label}>
-            <Rect
-              x={x(i)}
-              y={y(b.count)}
-              width={x.bandwidth()}
-              height={height - margin.bottom - y(b.count)}
-              fill={picked === i ? colors.accent : colors.ink}
-              onPress={() => setPicked(i)}
-              onPressIn={() => setPicked(i)}
-              accessibilityLabel={`${b.label}: ${b.count}`}
-            />
-            <SvgText
-              x={x(i)! + x.bandwidth() / 2}
-              y={y(b.count) - 4}
-              fontSize={11}
-              textAnchor="middle"
-              fill={colors.ink}
-              fontFamily={fonts.semibold}
-            >
-              {String(b.count)}
-            </SvgText>
-            <SvgText
-              x={x(i)! + x.bandwidth() / 2}
-              y={height - margin.bottom + 14}
-              fontSize={10}
-              textAnchor="middle"
-              fill={colors.muted}
-              fontFamily={fonts.regular}
-            >
-              {b.label.length > 14 ? `${b.label.slice(0, 13)}…` : b.label}
-            </SvgText>
-          </G>
-        ))}
-        <Path d={path} stroke={colors.accent} strokeWidth={2} fill="none" />
-        {top.map((b, i) => (
-          <Circle key={`c${b.label}`} cx={x(i)! + x.bandwidth() / 2} cy={share(b.cumulativeShare)} r={3} fill={colors.accent} />
-        ))}
-        <SvgText x={width - 4} y={share(1) + 4} fontSize={11} textAnchor="end" fill={colors.accent} fontFamily={fonts.semibold}>
-          100 %
-        </SvgText>
-        <SvgText x={margin.left} y={height - 12} fontSize={11} fill={colors.ink} fontFamily={fonts.semibold}>
-          Bars: count · line: cumulative share
-        </SvgText>
-      </Svg>
+      <ChartReader label={title} count={top.length} picked={picked} onPick={setPicked}>
+        <Svg width={width} height={height} aria-hidden>
+          {top.map((b, i) => (
+            <G key={b.label}>
+              <Rect
+                x={x(i)}
+                y={y(b.count)}
+                width={x.bandwidth()}
+                height={height - margin.bottom - y(b.count)}
+                fill={picked === i ? colors.accent : colors.ink}
+                onPress={() => setPicked(i)}
+                onPressIn={() => setPicked(i)}
+              />
+              <SvgText
+                x={x(i)! + x.bandwidth() / 2}
+                y={y(b.count) - 4}
+                fontSize={11}
+                textAnchor="middle"
+                fill={colors.ink}
+                fontFamily={fonts.semibold}
+              >
+                {String(b.count)}
+              </SvgText>
+              <SvgText
+                x={x(i)! + x.bandwidth() / 2}
+                y={height - margin.bottom + 14}
+                fontSize={10}
+                textAnchor="middle"
+                fill={colors.muted}
+                fontFamily={fonts.regular}
+              >
+                {b.label.length > 14 ? `${b.label.slice(0, 13)}…` : b.label}
+              </SvgText>
+            </G>
+          ))}
+          <Path d={path} stroke={colors.accent} strokeWidth={2} fill="none" />
+          {top.map((b, i) => (
+            <Circle key={`c${b.label}`} cx={x(i)! + x.bandwidth() / 2} cy={share(b.cumulativeShare)} r={3} fill={colors.accent} />
+          ))}
+          <SvgText x={width - 4} y={share(1) + 4} fontSize={11} textAnchor="end" fill={colors.accent} fontFamily={fonts.semibold}>
+            100 %
+          </SvgText>
+          <SvgText x={margin.left} y={height - 12} fontSize={11} fill={colors.ink} fontFamily={fonts.semibold}>
+            Bars: count · line: cumulative share
+          </SvgText>
+        </Svg>
+      </ChartReader>
       <Text variant="small" role="status">
-        {shown ? `${shown.label}: ${shown.count}, ${Math.round(shown.cumulativeShare * 100)} % of all so far.` : 'Tap a bar to read it.'}
+        {shown ? `${shown.label}: ${shown.count}, ${Math.round(shown.cumulativeShare * 100)} % of all so far.` : READ_HINT}
       </Text>
       <Text variant="muted">{`Summary: ${top.map((b) => `${b.label} ${b.count}`).join(', ')}.`}</Text>
     </View>

@@ -8,6 +8,7 @@ import { colors } from '@/components/ui/theme';
 import type { PChartRow } from '@/shared/statistics';
 
 import { CHART, shortWeek, XLabels, YAxis } from './chart-frame';
+import { ChartReader, READ_HINT } from './chart-reader';
 
 const pct = (v: number) => `${Math.round(v * 100)} %`;
 
@@ -30,67 +31,67 @@ export function ReworkPChart({ centre, rows, maxWidth }: { centre: number | null
   const shown = picked !== null ? rows[picked] : null;
   return (
     <View>
-      <Svg width={width} height={height} accessibilityLabel="Rework rate per week with control limits">
-        <YAxis
-          ticks={[0, 0.25, 0.5, 0.75, 1]}
-          y={y}
-          left={margin.left}
-          width={width - margin.left - margin.right}
-          format={pct}
-          label="Rework rate"
-        />
-        <Line x1={margin.left} x2={width - margin.right} y1={y(centre)} y2={y(centre)} stroke={colors.ink} strokeWidth={1.5} />
-        {rows.map((r, i) => (
-          <Line
-            key={`u${r.label}`}
-            x1={x(i) - step}
-            x2={x(i) + step}
-            y1={y(r.ucl)}
-            y2={y(r.ucl)}
-            stroke={colors.muted}
-            strokeDasharray="4 3"
+      <ChartReader label="Rework rate per week with control limits" count={rows.length} picked={picked} onPick={setPicked}>
+        <Svg width={width} height={height} aria-hidden>
+          <YAxis
+            ticks={[0, 0.25, 0.5, 0.75, 1]}
+            y={y}
+            left={margin.left}
+            width={width - margin.left - margin.right}
+            format={pct}
+            label="Rework rate"
           />
-        ))}
-        {rows.map((r, i) => (
-          <Line
-            key={`l${r.label}`}
-            x1={x(i) - step}
-            x2={x(i) + step}
-            y1={y(r.lcl)}
-            y2={y(r.lcl)}
-            stroke={colors.muted}
-            strokeDasharray="4 3"
-          />
-        ))}
-        {rows.map((r, i) =>
-          r.outside ? (
-            <Polygon
-              key={r.label}
-              points={`${x(i)},${y(r.p) - 8} ${x(i) - 7},${y(r.p) + 5} ${x(i) + 7},${y(r.p) + 5}`}
-              fill={colors.fail}
-              onPress={() => setPicked(i)}
-              onPressIn={() => setPicked(i)}
-              accessibilityLabel={`Week of ${shortWeek(r.label)}: ${pct(r.p)}, outside the limits`}
+          <Line x1={margin.left} x2={width - margin.right} y1={y(centre)} y2={y(centre)} stroke={colors.ink} strokeWidth={1.5} />
+          {rows.map((r, i) => (
+            <Line
+              key={`u${r.label}`}
+              x1={x(i) - step}
+              x2={x(i) + step}
+              y1={y(r.ucl)}
+              y2={y(r.ucl)}
+              stroke={colors.muted}
+              strokeDasharray="4 3"
             />
-          ) : (
-            <Circle
-              key={r.label}
-              cx={x(i)}
-              cy={y(r.p)}
-              r={5}
-              fill={colors.ink}
-              onPress={() => setPicked(i)}
-              onPressIn={() => setPicked(i)}
-              accessibilityLabel={`Week of ${shortWeek(r.label)}: ${pct(r.p)}`}
+          ))}
+          {rows.map((r, i) => (
+            <Line
+              key={`l${r.label}`}
+              x1={x(i) - step}
+              x2={x(i) + step}
+              y1={y(r.lcl)}
+              y2={y(r.lcl)}
+              stroke={colors.muted}
+              strokeDasharray="4 3"
             />
-          ),
-        )}
-        <XLabels labels={rows.map((r) => r.label)} x={x} bottom={height - margin.bottom} />
-      </Svg>
+          ))}
+          {rows.map((r, i) =>
+            r.outside ? (
+              <Polygon
+                key={r.label}
+                points={`${x(i)},${y(r.p) - 8} ${x(i) - 7},${y(r.p) + 5} ${x(i) + 7},${y(r.p) + 5}`}
+                fill={colors.fail}
+                onPress={() => setPicked(i)}
+                onPressIn={() => setPicked(i)}
+              />
+            ) : (
+              <Circle
+                key={r.label}
+                cx={x(i)}
+                cy={y(r.p)}
+                r={5}
+                fill={colors.ink}
+                onPress={() => setPicked(i)}
+                onPressIn={() => setPicked(i)}
+              />
+            ),
+          )}
+          <XLabels labels={rows.map((r) => r.label)} x={x} bottom={height - margin.bottom} />
+        </Svg>
+      </ChartReader>
       <Text variant="small" role="status">
         {shown
           ? `Week of ${shortWeek(shown.label)}: ${shown.defects} of ${shown.n} reviews asked for rework (${pct(shown.p)}); limits ${pct(shown.lcl)} to ${pct(shown.ucl)}.`
-          : 'Tap a point to read its value. Solid line: average; dashed: 3-sigma limits for that week.'}
+          : `${READ_HINT} Solid line: average; dashed: 3-sigma limits for that week.`}
       </Text>
       <Text variant="muted">
         {outside.length

@@ -9,6 +9,7 @@ import { colors } from '@/components/ui/theme';
 import type { WeeklyPoint } from '@/shared/trends';
 
 import { CHART, shortWeek, XLabels, YAxis } from './chart-frame';
+import { ChartReader, READ_HINT } from './chart-reader';
 
 // Mean weighted score per week. Tap or hover a point to read its value; the text below the
 // chart says the same for screen readers.
@@ -35,36 +36,35 @@ export function ScoreLineChart({ weekly, maxWidth }: { weekly: WeeklyPoint[]; ma
   const shown = picked !== null ? points[picked] : null;
   return (
     <View>
-      <Svg width={width} height={height} accessibilityLabel="Mean score per week">
-        <YAxis
-          ticks={[50, 60, 70, 80, 90, 100]}
-          y={y}
-          left={margin.left}
-          width={width - margin.left - margin.right}
-          format={String}
-          label="Mean score"
-        />
-        <Path d={path} stroke={colors.accent} strokeWidth={2} fill="none" />
-        {points.map((p, i) => (
-          <Circle
-            key={p.week}
-            cx={x(i)}
-            cy={y(p.meanScore!)}
-            r={picked === i ? 7 : 5}
-            fill={colors.surface}
-            stroke={colors.accent}
-            strokeWidth={2}
-            onPress={() => setPicked(i)}
-            onPressIn={() => setPicked(i)}
-            accessibilityLabel={`Week of ${shortWeek(p.week)}: ${p.meanScore!.toFixed(1)}`}
+      <ChartReader label="Mean score per week" count={points.length} picked={picked} onPick={setPicked}>
+        <Svg width={width} height={height} aria-hidden>
+          <YAxis
+            ticks={[50, 60, 70, 80, 90, 100]}
+            y={y}
+            left={margin.left}
+            width={width - margin.left - margin.right}
+            format={String}
+            label="Mean score"
           />
-        ))}
-        <XLabels labels={points.map((p) => p.week)} x={x} bottom={height - margin.bottom} />
-      </Svg>
+          <Path d={path} stroke={colors.accent} strokeWidth={2} fill="none" />
+          {points.map((p, i) => (
+            <Circle
+              key={p.week}
+              cx={x(i)}
+              cy={y(p.meanScore!)}
+              r={picked === i ? 7 : 5}
+              fill={colors.surface}
+              stroke={colors.accent}
+              strokeWidth={2}
+              onPress={() => setPicked(i)}
+              onPressIn={() => setPicked(i)}
+            />
+          ))}
+          <XLabels labels={points.map((p) => p.week)} x={x} bottom={height - margin.bottom} />
+        </Svg>
+      </ChartReader>
       <Text variant="small" role="status">
-        {shown
-          ? `Week of ${shortWeek(shown.week)}: mean ${shown.meanScore!.toFixed(1)} over ${shown.reviews} review(s).`
-          : 'Tap a point to read its value.'}
+        {shown ? `Week of ${shortWeek(shown.week)}: mean ${shown.meanScore!.toFixed(1)} over ${shown.reviews} review(s).` : READ_HINT}
       </Text>
       <Text variant="muted">{`Summary: ${points.length} week(s); highest ${best.meanScore!.toFixed(1)} (week of ${shortWeek(best.week)}), lowest ${worst.meanScore!.toFixed(1)} (week of ${shortWeek(worst.week)}); latest ${points.at(-1)!.meanScore!.toFixed(1)}.`}</Text>
     </View>

@@ -1,5 +1,7 @@
 import { Pressable, StyleSheet, View } from 'react-native';
 
+import { chooseOnKeys } from '@/components/lib/press-keys';
+
 import { FieldError } from './field-error';
 import { Text } from './text';
 import { colors, fonts, space } from './theme';
@@ -30,6 +32,7 @@ export function ChoiceField<T extends string>({ label, options, value, onChange,
               accessibilityState={{ checked: selected }}
               aria-checked={selected}
               onPress={() => onChange(option.value)}
+              {...chooseOnKeys(() => onChange(option.value))}
               style={[styles.option, selected && styles.selected]}
             >
               <Text style={[styles.optionText, selected && styles.selectedText]}>

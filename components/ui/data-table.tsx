@@ -11,8 +11,10 @@ import {
   tableFeatures,
   useTable,
 } from '@tanstack/react-table';
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+
+import { chooseOnKeys } from '@/components/lib/press-keys';
 
 import { Text } from './text';
 import { colors, fonts, space } from './theme';
@@ -33,6 +35,8 @@ type Props<T extends RowData> = {
   initialSorting?: SortingState;
   getRowId?: (row: T) => string;
   onRowPress?: (row: T) => void;
+  // Keyboard focus on a row makes it the selected one, so shortcuts act on what has focus.
+  onRowFocus?: (row: T) => void;
   // Server-side sorting: the parent owns the sort state and fetches rows in that order.
   sorting?: SortingState;
   onSortingChange?: (sorting: SortingState) => void;
@@ -49,6 +53,7 @@ export function DataTable<T extends RowData>({
   initialSorting = [],
   getRowId,
   onRowPress,
+  onRowFocus,
   sorting: controlled,
   onSortingChange,
   selectedRowId,
@@ -77,11 +82,19 @@ export function DataTable<T extends RowData>({
     getRowId: getRowId ? (row: T) => getRowId(row) : undefined,
   });
 
+  // When j/k move the selection while the keyboard is in the table, focus follows it.
+  const tableRef = useRef<View>(null);
+  useEffect(() => {
+    const node = tableRef.current as unknown as HTMLElement | null;
+    if (!selectedRowId || !node?.querySelector || !node.contains(document.activeElement)) return;
+    node.querySelector<HTMLElement>('[role="row"][aria-selected="true"]')?.focus();
+  }, [selectedRowId]);
+
   const width = (meta: unknown) => (meta as { width?: number } | undefined)?.width ?? 160;
 
   return (
     <ScrollView horizontal contentContainerStyle={{ flexGrow: 1 }}>
-      <View role="table" aria-label={label} style={styles.table}>
+      <View ref={tableRef} role="table" aria-label={label} style={styles.table}>
         {table.getHeaderGroups().map((group) => (
           <View role="row" key={group.id} style={[styles.row, styles.headerRow]}>
             {group.headers.map((header) => {
@@ -134,6 +147,8 @@ export function DataTable<T extends RowData>({
                 key={row.id}
                 aria-selected={selected}
                 onPress={() => onRowPress(row.original)}
+                onFocus={() => onRowFocus?.(row.original)}
+                {...chooseOnKeys(() => onRowPress(row.original))}
                 style={(state) => [styles.row, selected && styles.selected, (state as { focused?: boolean }).focused && styles.focused]}
               >
                 {cells}
@@ -164,6 +179,6 @@ const styles = StyleSheet.create({
   headerRow: { backgroundColor: colors.paper },
   cell: { paddingHorizontal: space.md, paddingVertical: space.sm, flexGrow: 1 },
   headerText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
-  selected: { backgroundColor: '#FBEDE6', borderLeftWidth: 4, borderLeftColor: colors.accent },
+  selected: { backgroundColor: colors.selectedRow, borderLeftWidth: 4, borderLeftColor: colors.accent },
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid' } as object,
 });

@@ -23,7 +23,7 @@ export function Section({
     <View style={styles.section} testID={testID}>
       <Pressable
         role="button"
-        accessibilityLabel={`${title}, ${open ? 'collapse' : 'expand'}`}
+        // The name comes from the visible title and Hide/Show; the state from aria-expanded.
         aria-expanded={open}
         onPress={() => setOpen(!open)}
         style={styles.header}

@@ -1,3 +1,4 @@
+import type { Ref } from 'react';
 import { Text as RNText, type TextProps } from 'react-native';
 
 import { colors, fonts } from './theme';
@@ -13,6 +14,7 @@ const styles: Record<Variant, object> = {
   small: { fontFamily: fonts.regular, fontSize: 13, color: colors.ink },
 };
 
-export function Text({ variant = 'body', style, ...props }: TextProps & { variant?: Variant }) {
+// React 19 passes ref as a prop: a heading can take focus (help dialog, scoring screen).
+export function Text({ variant = 'body', style, ...props }: TextProps & { variant?: Variant; ref?: Ref<RNText> }) {
   return <RNText {...props} style={[styles[variant], style]} />;
 }

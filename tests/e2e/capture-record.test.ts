@@ -53,7 +53,7 @@ const group = (name: string) => page.getByRole('radiogroup', { name });
 it('fills, uploads, warns, submits', async () => {
   await signIn(page, technician.email, DEMO_PASSWORD);
   await page.waitForURL(`${BASE_URL}/jobs`);
-  await page.getByRole('link', { name: new RegExp(`Job ${claimReference}`) }).click();
+  await page.getByRole('link', { name: new RegExp(claimReference) }).click();
   await page.getByRole('heading', { name: `Job ${claimReference}` }).waitFor();
 
   await group('Camera class').getByRole('radio', { name: 'Depth camera on tripod' }).click();
@@ -91,7 +91,7 @@ it('fills, uploads, warns, submits', async () => {
   await screenshot(page, 'capture-record-submitted-phone');
 
   await page.goto(`${BASE_URL}/jobs?status=submitted`);
-  const card = page.getByRole('link', { name: new RegExp(`Job ${claimReference}`) });
+  const card = page.getByRole('link', { name: new RegExp(claimReference) });
   await card.getByText('Submitted', { exact: true }).waitFor();
   await screenshot(page, 'my-jobs-submitted-phone');
 });

@@ -93,7 +93,7 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
       .nth(n - 1)
       .waitFor();
   }
-  await technician.getByRole('button', { name: 'Notes, expand' }).click();
+  await technician.getByRole('button', { name: /^Notes.*Show/ }).click();
   await technician.getByLabel('Notes for the reviewer').fill('Attic and hall doorway added as asked.');
   await technician.getByText(/^Saved \d/).waitFor();
   await screenshot(technician, 'rework-answered-phone');

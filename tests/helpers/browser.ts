@@ -10,12 +10,17 @@ export const PHONE = { width: 390, height: 844 };
 export const DESKTOP = { width: 1440, height: 900 };
 
 // Debian's chromium through playwright-core: nothing is downloaded.
-export async function launchBrowser(viewport: { width: number; height: number }): Promise<BrowserContext> {
+export async function launchBrowser(
+  viewport: { width: number; height: number },
+  options: { bypassCSP?: boolean } = {},
+): Promise<BrowserContext> {
   const profile = fs.mkdtempSync(path.join(os.tmpdir(), 'chromium-profile-'));
   return chromium.launchPersistentContext(profile, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     viewport,
+    // The accessibility audit injects axe-core as a script; our CSP would refuse it.
+    bypassCSP: options.bypassCSP ?? false,
     args: [
       '--headless',
       '--no-sandbox',

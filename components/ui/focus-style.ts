@@ -1,0 +1,2 @@
+// Native builds draw their own focus; see focus-style.web.ts.
+export function installFocusStyle() {}
