@@ -9,6 +9,7 @@
 //    (Clark & Evans 1954, Ecology 35:445–453).
 // Supplementary panoramas are not registered, so they are counted but left out of all checks.
 import { Delaunay } from 'd3-delaunay';
+import { quadtree } from 'd3-quadtree';
 
 import { LEVEL_KINDS, type LevelKind } from './capture-record';
 import type { StationPoint } from './station-file';
@@ -69,81 +70,77 @@ export function nearestNeighbours(points: StationPoint[]): NearestNeighbour[] {
       { station: points[1].number, neighbour: points[0].number, distance: d },
     ];
   }
-  const delaunay = Delaunay.from(
-    points,
-    (p) => p.x,
-    (p) => p.y,
-  );
-  return points.map((p, i) => {
-    let best = -1;
-    let bestD = Infinity;
-    for (const j of delaunay.neighbors(i)) {
-      const d = distance(p, points[j]);
-      if (d < bestD) {
-        bestD = d;
-        best = j;
-      }
-    }
-    // Collinear or coincident input leaves no triangulation; fall back to a scan.
-    if (best < 0) {
-      points.forEach((q, j) => {
-        if (j !== i) {
-          const d = distance(p, q);
-          if (d < bestD) {
-            bestD = d;
-            best = j;
-          }
-        }
-      });
-    }
-    return { station: p.number, neighbour: points[best].number, distance: bestD };
+  // Stations at one spot (a file of repeated rows) are each other's nearest neighbours at
+  // distance 0; the triangulation is built over distinct spots only, so the work stays
+  // O(n log n) whatever the input (d3-delaunay orders collinear spots along their line).
+  const spots = new Map<string, number[]>();
+  points.forEach((p, i) => {
+    const key = `${p.x},${p.y}`;
+    const at = spots.get(key);
+    if (at) at.push(i);
+    else spots.set(key, [i]);
   });
+  const groups = [...spots.values()];
+  const unique = groups.map((g) => points[g[0]]);
+  const nearestSpot: { spot: number; d: number }[] = unique.map(() => ({ spot: -1, d: Infinity }));
+  if (unique.length === 2) {
+    const d = distance(unique[0], unique[1]);
+    nearestSpot[0] = { spot: 1, d };
+    nearestSpot[1] = { spot: 0, d };
+  } else if (unique.length > 2) {
+    const delaunay = Delaunay.from(
+      unique,
+      (p) => p.x,
+      (p) => p.y,
+    );
+    unique.forEach((p, i) => {
+      for (const j of delaunay.neighbors(i)) {
+        const d = distance(p, unique[j]);
+        if (d < nearestSpot[i].d) nearestSpot[i] = { spot: j, d };
+      }
+    });
+  }
+  const result: NearestNeighbour[] = new Array(points.length);
+  groups.forEach((group, s) => {
+    group.forEach((i, k) => {
+      if (group.length > 1) result[i] = { station: points[i].number, neighbour: points[group[k === 0 ? 1 : 0]].number, distance: 0 };
+      else {
+        const near = nearestSpot[s];
+        result[i] = { station: points[i].number, neighbour: near.spot < 0 ? null : points[groups[near.spot][0]].number, distance: near.spot < 0 ? null : near.d };
+      }
+    });
+  });
+  return result;
 }
 
-// Nearest earlier station for each station in capture order, with a uniform grid so each
-// query looks only at nearby cells (ring by ring) instead of every earlier station.
+// Nearest earlier station for each station in capture order: stations go into a quadtree
+// (d3-quadtree) one by one, and each is first looked up against those already in it, so a
+// query costs about log n whatever the layout (a pile of repeated rows, a line, a cluster
+// with a far outlier).
 export function registrationChain(points: StationPoint[], maxSpacingM: number | null): ChainLink[] {
   const ordered = [...points].sort((a, b) => a.number - b.number);
-  if (ordered.length === 0) return [];
-  const spread =
-    Math.max(...ordered.map((p) => p.x)) -
-    Math.min(...ordered.map((p) => p.x)) +
-    Math.max(...ordered.map((p) => p.y)) -
-    Math.min(...ordered.map((p) => p.y));
-  const cell = Math.max(maxSpacingM ?? 0, spread / Math.sqrt(ordered.length), 1e-6);
-  const grid = new Map<string, StationPoint[]>();
-  const key = (cx: number, cy: number) => `${cx},${cy}`;
-  const maxRing = Math.ceil(spread / cell) + 1;
+  const tree = quadtree<StationPoint>()
+    .x((p) => p.x)
+    .y((p) => p.y);
+  // The tree holds each spot once: a repeated spot's nearest earlier station is the first one
+  // there, at distance 0 (a quadtree keeps duplicates in a list it would walk every time).
+  const firstAt = new Map<string, StationPoint>();
   return ordered.map((p) => {
-    const cx = Math.floor(p.x / cell);
-    const cy = Math.floor(p.y / cell);
-    let best: StationPoint | null = null;
-    let bestD = Infinity;
-    for (let ring = 0; ring <= maxRing; ring++) {
-      // Everything in rings beyond this one is at least (ring) cells away.
-      if (best && bestD <= (ring - 1) * cell) break;
-      for (let dx = -ring; dx <= ring; dx++) {
-        for (let dy = -ring; dy <= ring; dy++) {
-          if (Math.max(Math.abs(dx), Math.abs(dy)) !== ring) continue;
-          for (const q of grid.get(key(cx + dx, cy + dy)) ?? []) {
-            const d = distance(p, q);
-            if (d < bestD) {
-              bestD = d;
-              best = q;
-            }
-          }
-        }
-      }
+    const spot = `${p.x},${p.y}`;
+    const same = firstAt.get(spot);
+    let from: StationPoint | null = same ?? null;
+    if (!same) {
+      // (tree.size() walks the whole tree, so emptiness is told by the spots seen so far.)
+      from = firstAt.size ? (tree.find(p.x, p.y) ?? null) : null;
+      tree.add(p);
+      firstAt.set(spot, p);
     }
-    const bucket = grid.get(key(cx, cy));
-    if (bucket) bucket.push(p);
-    else grid.set(key(cx, cy), [p]);
-    const from = best as StationPoint | null;
+    const d = from ? distance(p, from) : null;
     return {
       station: p.number,
       from: from ? from.number : null,
-      distance: from ? bestD : null,
-      weak: from !== null && maxSpacingM !== null && bestD > maxSpacingM + 1e-9,
+      distance: d,
+      weak: d !== null && maxSpacingM !== null && d > maxSpacingM + 1e-9,
     };
   });
 }

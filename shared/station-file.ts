@@ -8,6 +8,7 @@
 //   kind     station (registered) or panorama (supplementary, not registered)
 import Papa from 'papaparse';
 
+import { RECORD_LIMITS } from './capture-limits';
 import { LEVEL_KINDS, type LevelKind } from './capture-record';
 import { type LengthUnit, toMetres } from './units';
 
@@ -19,7 +20,15 @@ export type FileProblem = { line: number; column: string; message: string };
 
 const REQUIRED = ['station', 'level', 'x', 'y', 'unit', 'kind'] as const;
 
+// A capture has at most this many stations (the record's own limit), and a file of that many
+// rows is far below this size; anything larger is refused before it is parsed.
+export const MAX_STATION_ROWS = RECORD_LIMITS.totalStations;
+export const MAX_STATION_FILE_BYTES = 1024 * 1024;
+
 export function parseStationFile(text: string): { stations: StationPoint[]; problems: FileProblem[] } {
+  if (text.length > MAX_STATION_FILE_BYTES) {
+    return { stations: [], problems: [{ line: 1, column: 'file', message: `A station file may be at most ${MAX_STATION_FILE_BYTES / 1024} KB` }] };
+  }
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
     header: true,
     skipEmptyLines: 'greedy',
@@ -32,6 +41,9 @@ export function parseStationFile(text: string): { stations: StationPoint[]; prob
   }
   if (problems.length) return { stations: [], problems };
 
+  if (parsed.data.length > MAX_STATION_ROWS) {
+    return { stations: [], problems: [{ line: MAX_STATION_ROWS + 2, column: 'station', message: `A capture has at most ${MAX_STATION_ROWS} stations; this file has ${parsed.data.length} rows` }] };
+  }
   const seen = new Map<number, number>();
   const stations: StationPoint[] = [];
   parsed.data.forEach((row, index) => {

@@ -65,6 +65,8 @@ export const config = {
     bucket: env.S3_BUCKET ?? 'sightline-files',
     accessKeyId: env.S3_ACCESS_KEY_ID ?? 'S3RVER',
     secretAccessKey: env.S3_SECRET_ACCESS_KEY ?? 'S3RVER',
+    connectTimeoutMs: number('S3_CONNECT_TIMEOUT_MS', 2000),
+    requestTimeoutMs: number('S3_REQUEST_TIMEOUT_MS', 8000),
   },
   review: {
     claimMinutes: number('CLAIM_MINUTES', DEFAULT_CLAIM_MINUTES),

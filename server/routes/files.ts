@@ -1,3 +1,5 @@
+import { pipeline } from 'node:stream/promises';
+
 import { Router } from 'express';
 import { param } from 'express-validator';
 
@@ -27,6 +29,10 @@ filesRouter.get(
     // Images show in the page; a PDF (which can carry scripts) and anything else download.
     const inline = file.contentType.startsWith('image/');
     res.setHeader('Content-Disposition', contentDisposition(inline ? 'inline' : 'attachment', file.originalName));
-    stream.pipe(res);
+    // pipeline ends the storage stream when the client goes away, and reports a broken one.
+    await pipeline(stream, res).catch(() => {
+      stream.destroy();
+      res.destroy();
+    });
   },
 );

@@ -67,6 +67,11 @@ export async function saveDraft(actor: Actor, jobId: number, record: CaptureReco
 
 // Freezes the record as the next immutable revision and hands the job to review.
 export async function submitRecord(actor: Actor, jobId: number, record: CaptureRecord, baseVersion: number) {
+  // Storage is read and the station layout analysed before any row is locked: a slow storage
+  // service or a large file never holds the job's lock or a database connection.
+  const preview = await findJobFor(actor, jobId);
+  assertAssignedTechnician(actor, preview);
+  const stationAnalysis = await analyseAttachedFile(jobId, record);
   return inTransaction(async (transaction) => {
     const job = await findJobFor(actor, jobId, { forUpdate: true, transaction });
     assertAssignedTechnician(actor, job);
@@ -82,7 +87,6 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     await assertPhotosBelongToJob(jobId, record, transaction);
 
     const files = await StoredFile.findAll({ where: { jobId, detachedAt: null }, order: [['id', 'ASC']], transaction });
-    const stationAnalysis = await analyseAttachedFile(jobId, record, transaction);
     const previous = (await CaptureRevision.max('number', { where: { jobId }, transaction })) as number | null;
     const number = (previous ?? 0) + 1;
     const submittedAt = new Date();

@@ -5,11 +5,14 @@ import { fromBuffer } from 'file-type';
 import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, type FileKind } from '../../shared/files';
 import { HttpError, invalid, notFound } from '../errors';
 import { StoredFile } from '../models';
-import { deleteObject, getObjectStream, putObject } from '../storage/s3';
+import { deleteObject, getObjectStream, putObject, StorageUnavailable } from '../storage/s3';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 import { assertValidStationFile } from './station-service';
 
 type Actor = Express.User;
+
+export const storageUnavailable = () =>
+  new HttpError(503, 'storage_unavailable', 'File storage cannot be reached right now. Please try again.');
 
 // The file's type is read from its bytes; the name and the browser's claim are ignored.
 export async function sniffContentType(buffer: Buffer): Promise<string | null> {
@@ -46,7 +49,12 @@ export async function uploadFile(actor: Actor, jobId: number, kind: FileKind, up
   if (kind === 'station_coordinates') assertValidStationFile(upload.buffer);
   const sha256 = crypto.createHash('sha256').update(upload.buffer).digest('hex');
   const storageKey = `jobs/${jobId}/${crypto.randomUUID()}`;
-  await putObject(storageKey, upload.buffer, contentType, sha256);
+  try {
+    await putObject(storageKey, upload.buffer, contentType, sha256);
+  } catch (error) {
+    if (error instanceof StorageUnavailable) throw storageUnavailable();
+    throw error;
+  }
   try {
     const file = await StoredFile.create({
       jobId,
@@ -74,7 +82,7 @@ export async function openFile(actor: Actor, fileId: number) {
   try {
     return { file, stream: await getObjectStream(file.storageKey) };
   } catch {
-    throw new HttpError(503, 'storage_unavailable', 'File storage cannot be reached right now. Please try again.');
+    throw storageUnavailable();
   }
 }
 

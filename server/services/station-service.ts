@@ -1,5 +1,3 @@
-import type { Transaction } from 'sequelize';
-
 import { type CaptureRecord, roomAreaM2 } from '../../shared/capture-record';
 import { analyseStations, type StationAnalysis } from '../../shared/station-analysis';
 import { type FileProblem, parseStationFile } from '../../shared/station-file';
@@ -43,15 +41,11 @@ export function analyseFor(record: CaptureRecord, text: string): StationAnalysis
 }
 
 // The newest station file attached to the job's working record, analysed against a record.
-export async function analyseAttachedFile(
-  jobId: number,
-  record: CaptureRecord,
-  transaction?: Transaction,
-): Promise<StationAnalysis | null> {
+// Reads object storage: never call it inside a database transaction.
+export async function analyseAttachedFile(jobId: number, record: CaptureRecord): Promise<StationAnalysis | null> {
   const file = await StoredFile.findOne({
     where: { jobId, kind: 'station_coordinates', detachedAt: null },
     order: [['id', 'DESC']],
-    transaction,
   });
   if (!file) return null;
   return analyseFor(record, await readText(file.storageKey));

@@ -195,10 +195,10 @@ describe('GET /api/trends/calibration', () => {
     expect(c.decisions.kappa).toBeNull();
     expect(c.decisions.band).toBeNull();
     expect(c.decisions.table[0]).toEqual([1, 1, 0]);
-    // Coverage scores (4, 4) and (4, 3): linear weights give observed and expected disagreement both 0.125 → κw 0.
-    expect(c.criterionScores.kappa).toBeCloseTo(0, 10);
+    // Coverage scores (4, 4) and (4, 3): the first reviewer gave 4 only, so κw is not defined either.
+    expect(c.criterionScores.kappa).toBeNull();
     // |100 − 95| and |90 − 70| → (5 + 20) / 2 = 12.5.
     expect(c.meanAbsoluteScoreDifference).toBeCloseTo(12.5, 10);
-    expect(c.reviewerPairs).toEqual([{ reviewers: ['Aa Reviewer', 'Bb Reviewer'], n: 2, decisionKappa: 0, band: 'Slight' }]);
+    expect(c.reviewerPairs).toEqual([{ reviewers: ['Aa Reviewer', 'Bb Reviewer'], n: 2, decisionKappa: null, band: null }]);
   });
 });
