@@ -2,14 +2,14 @@
 // client components (jest-expo web preset), and browser tests (playwright-core + chromium).
 const moduleNameMapper = { '^@/(.*)$': '<rootDir>/$1' };
 // d3-delaunay and its helpers ship only as ES modules; Babel turns them into CommonJS for Jest.
-const esmOnly = ['d3-delaunay', 'delaunator', 'robust-predicates'];
+const esmOnly = ['d3-delaunay', 'd3-quadtree', 'delaunator', 'robust-predicates'];
 const nodeTs = {
   preset: 'ts-jest',
   testEnvironment: 'node',
   moduleNameMapper,
   transform: {
     '^.+\\.tsx?$': ['ts-jest', { tsconfig: 'tsconfig.server.json' }],
-    '^.+\\.js$': ['babel-jest', { babelrc: false, configFile: false, plugins: ['@babel/plugin-transform-modules-commonjs'] }],
+    '^.+\\.m?js$': ['babel-jest', { babelrc: false, configFile: false, plugins: ['@babel/plugin-transform-modules-commonjs'] }],
   },
   transformIgnorePatterns: [`node_modules/(?!(${esmOnly.join('|')})/)`],
 };

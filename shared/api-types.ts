@@ -48,3 +48,14 @@ export type Dispute = ReworkItemView & { jobId: number; claimReference: string; 
 export type MailboxMessage = { id: string; receivedAt: string; from: string; to: string[]; subject: string; text: string; html: string };
 
 export type PersonRef = { id: number; name: string };
+
+// GET /api/outbox/failed
+export type FailedEmail = {
+  id: number;
+  jobId: number | null;
+  kind: string;
+  subject: string;
+  attempts: number;
+  lastError: string | null;
+  createdAt: string;
+};

@@ -106,7 +106,11 @@ export function nearestNeighbours(points: StationPoint[]): NearestNeighbour[] {
       if (group.length > 1) result[i] = { station: points[i].number, neighbour: points[group[k === 0 ? 1 : 0]].number, distance: 0 };
       else {
         const near = nearestSpot[s];
-        result[i] = { station: points[i].number, neighbour: near.spot < 0 ? null : points[groups[near.spot][0]].number, distance: near.spot < 0 ? null : near.d };
+        result[i] = {
+          station: points[i].number,
+          neighbour: near.spot < 0 ? null : points[groups[near.spot][0]].number,
+          distance: near.spot < 0 ? null : near.d,
+        };
       }
     });
   });

@@ -27,7 +27,10 @@ export const MAX_STATION_FILE_BYTES = 1024 * 1024;
 
 export function parseStationFile(text: string): { stations: StationPoint[]; problems: FileProblem[] } {
   if (text.length > MAX_STATION_FILE_BYTES) {
-    return { stations: [], problems: [{ line: 1, column: 'file', message: `A station file may be at most ${MAX_STATION_FILE_BYTES / 1024} KB` }] };
+    return {
+      stations: [],
+      problems: [{ line: 1, column: 'file', message: `A station file may be at most ${MAX_STATION_FILE_BYTES / 1024} KB` }],
+    };
   }
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
     header: true,
@@ -42,7 +45,16 @@ export function parseStationFile(text: string): { stations: StationPoint[]; prob
   if (problems.length) return { stations: [], problems };
 
   if (parsed.data.length > MAX_STATION_ROWS) {
-    return { stations: [], problems: [{ line: MAX_STATION_ROWS + 2, column: 'station', message: `A capture has at most ${MAX_STATION_ROWS} stations; this file has ${parsed.data.length} rows` }] };
+    return {
+      stations: [],
+      problems: [
+        {
+          line: MAX_STATION_ROWS + 2,
+          column: 'station',
+          message: `A capture has at most ${MAX_STATION_ROWS} stations; this file has ${parsed.data.length} rows`,
+        },
+      ],
+    };
   }
   const seen = new Map<number, number>();
   const stations: StationPoint[] = [];

@@ -9,12 +9,15 @@ import type { SessionUser } from '@/shared/api-types';
 import { navFor } from '@/shared/navigation';
 import { ROLE_LABELS } from '@/shared/roles';
 
+import { FailedEmailNotice } from './failed-email-notice';
+
 export function AppShell({ user, children }: { user: SessionUser; children: React.ReactNode }) {
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_BREAKPOINT;
   const pathname = usePathname();
   const signOut = useSignOutMutation();
   const items = navFor(user.role);
+  const staff = user.role === 'manager' || user.role === 'admin';
   const isCurrent = (href: string) => pathname === href || pathname.startsWith(`${href}/`);
 
   const navLinks = items.map((item) => {
@@ -63,6 +66,7 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
           {signOutButton}
         </View>
         <View role="main" style={styles.main}>
+          {staff ? <FailedEmailNotice /> : null}
           {children}
         </View>
       </View>
@@ -79,6 +83,7 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
         </View>
       </View>
       <View role="main" style={styles.main}>
+        {staff ? <FailedEmailNotice /> : null}
         {children}
       </View>
       <View role="navigation" aria-label="Main" style={styles.tabBar}>

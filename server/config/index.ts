@@ -53,6 +53,8 @@ export const config = {
     intervalMs: number('OUTBOX_INTERVAL_MS', 3000),
     lockSeconds: number('OUTBOX_LOCK_SECONDS', 60),
     maxBackoffSeconds: number('OUTBOX_MAX_BACKOFF_SECONDS', 900),
+    // After this many failed attempts a message is marked failed and shown to managers.
+    maxAttempts: number('OUTBOX_MAX_ATTEMPTS', 8),
   },
   // Time the technician has to answer a rework request; a reminder goes out after it.
   reworkHours: number('REWORK_HOURS', 48),

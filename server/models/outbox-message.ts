@@ -11,7 +11,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
   declare subject: string;
   declare textBody: string;
   declare htmlBody: string;
-  declare status: CreationOptional<'pending' | 'sent'>;
+  declare status: CreationOptional<'pending' | 'sent' | 'failed'>;
   declare attempts: CreationOptional<number>;
   declare lastError: string | null;
   declare nextAttemptAt: Date;
@@ -31,7 +31,7 @@ export class OutboxMessage extends Model<InferAttributes<OutboxMessage>, InferCr
         subject: { type: DataTypes.STRING(200), allowNull: false },
         textBody: { type: DataTypes.TEXT, allowNull: false },
         htmlBody: { type: DataTypes.TEXT, allowNull: false },
-        status: { type: DataTypes.ENUM('pending', 'sent'), allowNull: false, defaultValue: 'pending' },
+        status: { type: DataTypes.ENUM('pending', 'sent', 'failed'), allowNull: false, defaultValue: 'pending' },
         attempts: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false, defaultValue: 0 },
         lastError: { type: DataTypes.TEXT, allowNull: true },
         nextAttemptAt: { type: DataTypes.DATE(3), allowNull: false },

@@ -5,6 +5,7 @@ import { healthRouter } from './health';
 import { jobsRouter } from './jobs';
 import { mailboxRouter } from './mailbox';
 import { meRouter } from './me';
+import { outboxRouter } from './outbox';
 import { queueRouter } from './queue';
 import { reviewsRouter } from './reviews';
 import { reworkRouter } from './rework';
@@ -29,5 +30,6 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api', router: reviewsRouter },
   { prefix: '/api', router: reworkRouter },
   { prefix: '/api/mailbox', router: mailboxRouter },
+  { prefix: '/api/outbox', router: outboxRouter },
   { prefix: '/api/trends', router: trendsRouter },
 ];

@@ -99,6 +99,13 @@ const CASES: Record<string, BadInputCase> = {
     body: { decision: 'maybe', scores: 'all fine' },
     fields: ['decision', 'scores'],
   },
+  'POST /api/outbox/:id/retry': {
+    as: 'manager',
+    tables: ['outbox'],
+    prepare: async () => ({ path: '/api/outbox/not-a-number/retry' }),
+    body: {},
+    fields: ['id'],
+  },
   'POST /api/jobs/:id/files': {
     as: 'technician',
     tables: ['files'],

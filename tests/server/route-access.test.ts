@@ -4,7 +4,7 @@
 import type { Express } from 'express';
 
 import { createApp } from '../../server/app';
-import { sequelize } from '../../server/models';
+import { OutboxMessage, sequelize } from '../../server/models';
 import { putObject } from '../../server/storage/s3';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { type Role, ROLES } from '../../shared/roles';
@@ -167,6 +167,11 @@ const ROUTES: Record<string, RouteCase> = {
     }),
   },
   'GET /api/second-reviews': { allowed: ['reviewer'] },
+  'GET /api/outbox/failed': { allowed: ['manager', 'admin'] },
+  'POST /api/outbox/:id/retry': {
+    allowed: ['manager', 'admin'],
+    prepare: async () => ({ path: `/api/outbox/${(await failedEmail()).id}/retry` }),
+  },
   'POST /api/second-reviews/:id/claim': {
     allowed: ['reviewer'],
     prepare: async () => ({ path: `/api/second-reviews/${(await secondReviewByAnother()).id}/claim` }),
@@ -214,6 +219,26 @@ const ROUTES: Record<string, RouteCase> = {
     prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/station-analysis` }),
   },
 };
+
+// An e-mail that failed every attempt.
+function failedEmail() {
+  return OutboxMessage.create({
+    jobId: null,
+    kind: 'test',
+    dedupeKey: null,
+    recipients: ['nobody@example.test'],
+    subject: 'Undeliverable',
+    textBody: 't',
+    htmlBody: '<p>t</p>',
+    nextAttemptAt: new Date(),
+    lastError: 'mailbox unavailable',
+    lockedBy: null,
+    lockedUntil: null,
+    sentAt: null,
+    status: 'failed',
+    attempts: 8,
+  });
+}
 
 // A claim the signed-in reviewer holds (anyone else's claim for the other roles).
 async function claimedFor(me: { id: number; role: Role } | null) {
