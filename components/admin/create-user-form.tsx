@@ -16,7 +16,7 @@ const roleOptions = ROLES.map((value) => ({ value, label: ROLE_LABELS[value] }))
 export function CreateUserForm() {
   const create = useUserCreateMutation();
   const { control, handleSubmit, setError, reset } = useForm<NewUser>({
-    defaultValues: { name: '', email: '', role: 'technician', password: '' },
+    defaultValues: { name: '', email: '', role: 'technician' },
   });
 
   const submit = handleSubmit(async (values) => {
@@ -33,7 +33,10 @@ export function CreateUserForm() {
   return (
     <View style={styles.card} role="form" aria-label="Add a user">
       <Text variant="heading">Add a user</Text>
-      {create.isSuccess ? <Notice tone="info">{`Added ${create.data.user.name}.`}</Notice> : null}
+      {create.isSuccess ? (
+        <Notice tone="info">{`Added ${create.data.user.name}. An invitation e-mail with a link to choose a password is on its way.`}</Notice>
+      ) : null}
+      <Text variant="muted">The new person chooses their own password from the invitation e-mail; nobody else ever knows it.</Text>
       {create.error instanceof ApiError && Object.keys(create.error.fields).length === 0 ? (
         <Notice tone="error">{create.error.message}</Notice>
       ) : null}
@@ -69,22 +72,6 @@ export function CreateUserForm() {
             options={roleOptions}
             value={field.value}
             onChange={field.onChange}
-            error={fieldState.error?.message}
-          />
-        )}
-      />
-      <Controller
-        control={control}
-        name="password"
-        rules={{ minLength: { value: 10, message: 'Use at least 10 characters' } }}
-        render={({ field, fieldState }) => (
-          <TextField
-            label="First password"
-            hint="At least 10 characters; ask them to keep it private."
-            secureTextEntry
-            autoComplete="new-password"
-            value={field.value}
-            onChangeText={field.onChange}
             error={fieldState.error?.message}
           />
         )}

@@ -1,3 +1,4 @@
+import { Link } from 'expo-router';
 import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 
@@ -6,7 +7,7 @@ import { useSignInMutation } from '@/components/queries/session';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { TextField } from '@/components/ui/text-field';
-import { space } from '@/components/ui/theme';
+import { colors, fonts, space } from '@/components/ui/theme';
 
 type Values = { email: string; password: string };
 
@@ -68,6 +69,9 @@ export function SignInForm() {
         )}
       />
       <Button label="Sign in" onPress={submit} busy={formState.isSubmitting} />
+      <Link href="/forgot-password" style={{ color: colors.accent, fontFamily: fonts.semibold }}>
+        Forgot your password?
+      </Link>
     </View>
   );
 }

@@ -17,7 +17,7 @@ export function useUsersQuery() {
   });
 }
 
-export type NewUser = { name: string; email: string; role: Role; password: string };
+export type NewUser = { name: string; email: string; role: Role };
 
 export function useUserCreateMutation() {
   const queryClient = useQueryClient();

@@ -52,6 +52,9 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
     <View>
       <Text style={styles.userName}>{user.name}</Text>
       <Text style={styles.userRole}>{ROLE_LABELS[user.role]}</Text>
+      <Link href="/account/password" style={styles.userRole}>
+        Change password
+      </Link>
     </View>
   );
 

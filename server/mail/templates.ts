@@ -6,11 +6,11 @@ const escape = (s: string) => s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<':
 function layout(title: string, paragraphs: string[], items: string[] = [], link?: { url: string; label: string }): string {
   return [
     '<!doctype html><html><body style="font-family:Arial,sans-serif;color:#1B2430;background:#F7F5F0;padding:16px">',
-    `<h1 style="font-size:20px;border-bottom:3px solid #C4572A;padding-bottom:6px">${escape(title)}</h1>`,
+    `<h1 style="font-size:20px;border-bottom:3px solid #B85227;padding-bottom:6px">${escape(title)}</h1>`,
     ...paragraphs.map((p) => `<p>${escape(p)}</p>`),
     items.length ? `<ol>${items.map((i) => `<li style="margin-bottom:8px">${i}</li>`).join('')}</ol>` : '',
-    link ? `<p><a href="${escape(link.url)}" style="color:#C4572A;font-weight:bold">${escape(link.label)}</a></p>` : '',
-    '<p style="color:#6B7280;font-size:12px">Sent by Sightline. Reply to your reviewer or manager, not to this address.</p>',
+    link ? `<p><a href="${escape(link.url)}" style="color:#B85227;font-weight:bold">${escape(link.label)}</a></p>` : '',
+    '<p style="color:#636A77;font-size:12px">Sent by Sightline. Reply to your reviewer or manager, not to this address.</p>',
     '</body></html>',
   ].join('');
 }
@@ -100,6 +100,40 @@ export function reworkReminderEmail(job: JobFacts, reworkDueAt: Date, open: numb
       [`The rework for ${job.street}, ${job.city} was due ${reworkDueAt.toUTCString()}; ${open} item(s) are still open.`],
       [],
       { url: job.jobUrl, label: 'Open the job in Sightline' },
+    ),
+  };
+}
+
+export function invitationEmail(name: string, link: string, expiresAt: Date): Email {
+  const subject = 'Your Sightline account';
+  const text = `Hello ${name},\n\nAn account has been made for you in Sightline. Choose your password here (the link works once, until ${expiresAt.toUTCString()}):\n\n${link}\n`;
+  return {
+    subject,
+    text,
+    html: layout(
+      subject,
+      [`Hello ${name},`, `An account has been made for you in Sightline. The link works once, until ${expiresAt.toUTCString()}.`],
+      [],
+      { url: link, label: 'Choose your password' },
+    ),
+  };
+}
+
+export function passwordResetEmail(name: string, link: string, expiresAt: Date): Email {
+  const subject = 'Set a new Sightline password';
+  const text = `Hello ${name},\n\nSomeone (we hope you) asked to set a new password for your Sightline account. The link works once, until ${expiresAt.toUTCString()}, and also lifts any sign-in lock:\n\n${link}\n\nIf you did not ask, ignore this message: your password stays as it is.\n`;
+  return {
+    subject,
+    text,
+    html: layout(
+      subject,
+      [
+        `Hello ${name},`,
+        `Someone (we hope you) asked to set a new password. The link works once, until ${expiresAt.toUTCString()}, and also lifts any sign-in lock.`,
+        'If you did not ask, ignore this message: your password stays as it is.',
+      ],
+      [],
+      { url: link, label: 'Set a new password' },
     ),
   };
 }

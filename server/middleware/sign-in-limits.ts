@@ -47,3 +47,18 @@ export const signInLimitPerAccount = rateLimit({
   keyGenerator: (req) => accountKey(req.body?.email),
   handler: refuse,
 });
+
+// Password-reset requests per address: enough for a person, too few to flood someone's inbox.
+export const passwordResetLimitPerIp = rateLimit({
+  windowMs,
+  limit: config.signInLimits.failuresPerIp,
+  standardHeaders: 'draft-8',
+  legacyHeaders: false,
+  store: new MariaDbRateLimitStore('reset-ip'),
+  handler: (_req: Request, res: Response) =>
+    res
+      .status(429)
+      .json({
+        error: { code: 'too_many_attempts', message: `Too many requests. Try again in ${config.signInLimits.windowMinutes} minutes.` },
+      }),
+});

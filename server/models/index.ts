@@ -5,6 +5,7 @@ import { CaptureDraft } from './capture-draft';
 import { CaptureRevision } from './capture-revision';
 import { Job } from './job';
 import { OutboxMessage } from './outbox-message';
+import { PasswordToken } from './password-token';
 import { Review } from './review';
 import { ReviewDraft } from './review-draft';
 import { ReviewScore } from './review-score';
@@ -29,6 +30,7 @@ ReworkItem.initModel(sequelize);
 SecondReview.initModel(sequelize);
 AuditEvent.initModel(sequelize);
 OutboxMessage.initModel(sequelize);
+PasswordToken.initModel(sequelize);
 
 Job.belongsTo(User, { as: 'technician', foreignKey: 'technicianId' });
 Job.belongsTo(User, { as: 'createdBy', foreignKey: 'createdById' });
@@ -48,6 +50,7 @@ export {
   CaptureRevision,
   Job,
   OutboxMessage,
+  PasswordToken,
   Review,
   ReviewDraft,
   ReviewScore,

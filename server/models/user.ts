@@ -8,7 +8,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare name: string;
   declare email: string;
   declare role: Role;
-  declare passwordHash: string;
+  declare passwordHash: string | null;
   declare active: CreationOptional<boolean>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -28,7 +28,7 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
         name: { type: DataTypes.STRING(120), allowNull: false },
         email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
         role: { type: DataTypes.ENUM(...ROLES), allowNull: false },
-        passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+        passwordHash: { type: DataTypes.STRING(100), allowNull: true },
         active: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -6,6 +6,7 @@ import { jobsRouter } from './jobs';
 import { mailboxRouter } from './mailbox';
 import { meRouter } from './me';
 import { outboxRouter } from './outbox';
+import { passwordRouter } from './password';
 import { queueRouter } from './queue';
 import { reviewsRouter } from './reviews';
 import { reworkRouter } from './rework';
@@ -21,6 +22,7 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api/health', router: healthRouter },
   { prefix: '/api/session', router: sessionRouter },
   { prefix: '/api/me', router: meRouter },
+  { prefix: '/api/password', router: passwordRouter },
   { prefix: '/api/users', router: usersRouter },
   { prefix: '/api/technicians', router: techniciansRouter },
   { prefix: '/api/jobs', router: jobsRouter },

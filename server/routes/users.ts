@@ -4,7 +4,8 @@ import { body, param } from 'express-validator';
 import { ROLES } from '../../shared/roles';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
-import { createUser, listUsers, updateUser } from '../services/users-service';
+import { inviteUser } from '../services/account-service';
+import { listUsers, updateUser } from '../services/users-service';
 
 export const usersRouter = Router();
 usersRouter.use(requireRole('admin'));
@@ -19,10 +20,10 @@ usersRouter.post(
     body('name', 'Enter a name of 2 to 120 characters').isString().trim().isLength({ min: 2, max: 120 }),
     body('email', 'Enter a valid e-mail address').isString().trim().isEmail().isLength({ max: 254 }),
     body('role', `Choose one of: ${ROLES.join(', ')}`).isIn(ROLES),
-    body('password', 'Use at least 10 characters').isString().isLength({ min: 10, max: 200 }),
   ),
+  // No password is typed by the admin: the new person chooses it from the invitation e-mail.
   async (req, res) => {
-    const user = await createUser(req.body);
+    const user = await inviteUser({ name: req.body.name, email: req.body.email, role: req.body.role });
     res.status(201).json({ user });
   },
 );

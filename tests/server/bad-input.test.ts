@@ -28,8 +28,8 @@ const CASES: Record<string, BadInputCase> = {
   'POST /api/users': {
     as: 'admin',
     tables: ['users'],
-    body: { name: '', email: 'x@', role: 'chief', password: '1' },
-    fields: ['email', 'name', 'password', 'role'],
+    body: { name: '', email: 'x@', role: 'chief' },
+    fields: ['email', 'name', 'role'],
   },
   'PATCH /api/users/:id': {
     as: 'admin',
@@ -105,6 +105,24 @@ const CASES: Record<string, BadInputCase> = {
     prepare: async () => ({ path: '/api/outbox/not-a-number/retry' }),
     body: {},
     fields: ['id'],
+  },
+  'POST /api/password/forgot': {
+    as: 'anonymous',
+    tables: ['password_tokens', 'outbox'],
+    body: { email: 'not-an-address' },
+    fields: ['email'],
+  },
+  'POST /api/password/reset': {
+    as: 'anonymous',
+    tables: ['users', 'password_tokens'],
+    body: { token: 7, password: ['x'] },
+    fields: ['password', 'token'],
+  },
+  'PUT /api/me/password': {
+    as: 'technician',
+    tables: ['users'],
+    body: { currentPassword: '', newPassword: 42 },
+    fields: ['currentPassword', 'newPassword'],
   },
   'POST /api/jobs/:id/files': {
     as: 'technician',

@@ -1,10 +1,12 @@
 // Walks every registered API route as anonymous and as each role, and checks the answer:
 // 2xx where the role is allowed, 401 for anonymous, 403 for a role that is not.
 // A route missing from ROUTES fails the first test, so no route ships unchecked.
+import crypto from 'node:crypto';
+
 import type { Express } from 'express';
 
 import { createApp } from '../../server/app';
-import { OutboxMessage, sequelize } from '../../server/models';
+import { OutboxMessage, PasswordToken, sequelize } from '../../server/models';
 import { putObject } from '../../server/storage/s3';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { type Role, ROLES } from '../../shared/roles';
@@ -167,6 +169,15 @@ const ROUTES: Record<string, RouteCase> = {
     }),
   },
   'GET /api/second-reviews': { allowed: ['reviewer'] },
+  'POST /api/password/forgot': { allowed: EVERYONE, prepare: async () => ({ body: { email: 'nobody@example.test' } }) },
+  'POST /api/password/reset': {
+    allowed: EVERYONE,
+    prepare: async () => ({ body: { token: await resetToken(), password: 'Correct horse battery 9' } }),
+  },
+  'PUT /api/me/password': {
+    allowed: [...ROLES],
+    prepare: async () => ({ body: { currentPassword: TEST_PASSWORD, newPassword: 'Gravel-lantern-owl-2026' } }),
+  },
   'GET /api/outbox/failed': { allowed: ['manager', 'admin'] },
   'POST /api/outbox/:id/retry': {
     allowed: ['manager', 'admin'],
@@ -219,6 +230,20 @@ const ROUTES: Record<string, RouteCase> = {
     prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/station-analysis` }),
   },
 };
+
+// A live reset link for a fresh account (public route: anyone holding the link may use it).
+async function resetToken() {
+  const user = await createUser();
+  const token = crypto.randomBytes(32).toString('base64url');
+  await PasswordToken.create({
+    userId: user.id,
+    tokenHash: crypto.createHash('sha256').update(token).digest('hex'),
+    purpose: 'reset',
+    expiresAt: new Date(Date.now() + 3_600_000),
+    usedAt: null,
+  });
+  return token;
+}
 
 // An e-mail that failed every attempt.
 function failedEmail() {

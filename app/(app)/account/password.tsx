@@ -1,0 +1,3 @@
+import { ChangePasswordScreen } from '@/components/account/change-password-screen';
+
+export default ChangePasswordScreen;

@@ -1,0 +1,3 @@
+import { ForgotPasswordScreen } from '@/components/account/forgot-password-screen';
+
+export default ForgotPasswordScreen;

@@ -1,0 +1,3 @@
+import { SetPasswordScreen } from '@/components/account/set-password-screen';
+
+export default SetPasswordScreen;
