@@ -4,7 +4,7 @@ import { body } from 'express-validator';
 import { passport, SIGN_IN_FAILED } from '../auth/passport';
 import { HttpError } from '../errors';
 import { requireAuth } from '../middleware/require-auth';
-import { signInLimitPerAccount, signInLimitPerIp } from '../middleware/sign-in-limits';
+import { signInLimitPerIp, signInSlowDownPerAccount } from '../middleware/sign-in-limits';
 import { validate } from '../middleware/validate';
 
 export const sessionRouter = Router();
@@ -13,7 +13,7 @@ export const sessionRouter = Router();
 sessionRouter.post(
   '/',
   signInLimitPerIp,
-  signInLimitPerAccount,
+  signInSlowDownPerAccount,
   validate(
     body('email', 'Enter a valid e-mail address').isString().isLength({ max: 254 }).trim().isEmail(),
     body('password', 'Enter your password').isString().isLength({ min: 1, max: 200 }),

@@ -69,7 +69,7 @@ describe('POST /api/session', () => {
     expect(Object.keys(res.body.error.fields).sort()).toEqual(['email', 'password']);
   });
 
-  it('locks an account after repeated failures, even for the right password', async () => {
+  it('slows repeated failures on an account down progressively, but never locks its owner out', async () => {
     const user = await createUser();
     for (let i = 0; i < config.signInLimits.failuresPerAccount; i++) {
       const res = await clientAgent(app)
@@ -77,9 +77,29 @@ describe('POST /api/session', () => {
         .send({ email: user.email, password: `wrong-${i}` });
       expect(res.status).toBe(401);
     }
-    const blocked = await clientAgent(app).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
-    expect(blocked.status).toBe(429);
-    expect(blocked.body.error.code).toBe('too_many_attempts');
+    const timed = async (password: string) => {
+      const started = Date.now();
+      const res = await clientAgent(app).post('/api/session').send({ email: user.email, password });
+      return { status: res.status, ms: Date.now() - started };
+    };
+    const first = await timed('wrong-again');
+    const second = await timed('wrong-once-more');
+    expect(first.status).toBe(401);
+    expect(first.ms).toBeGreaterThanOrEqual(450);
+    expect(second.ms).toBeGreaterThanOrEqual(950);
+    // The right password still works: someone typing wrong passwords for you cannot lock you out.
+    expect((await timed(TEST_PASSWORD)).status).toBe(200);
+    await resetSignInLimits();
+  });
+
+  it('counts an accented or differently cased e-mail against the same account', async () => {
+    const user = await createUser({ email: `tess-${Date.now()}@example.test` });
+    const variants = [user.email.toUpperCase(), user.email.replace('e', 'é'), user.email.replace('s', 'ś'), user.email, user.email];
+    for (const email of variants) await clientAgent(app).post('/api/session').send({ email, password: 'wrong-password' });
+    const started = Date.now();
+    await clientAgent(app).post('/api/session').send({ email: user.email, password: 'wrong-password' });
+    expect(Date.now() - started).toBeGreaterThanOrEqual(450);
+    await resetSignInLimits();
   });
 
   it('limits failures per address across many accounts', async () => {
