@@ -330,7 +330,7 @@ export function demoJobs(now = new Date()): DemoJob[] {
       claimReference: `MRK-26-${String(1001 + i)}`,
       street: `${10 + Math.floor(rand() * 190)} ${STREETS[i % STREETS.length]}`,
       city: 'Maraskell',
-      postcode: `BF-${1000 + Math.floor(rand() * 9000)}`,
+      postcode: `MK-${1000 + Math.floor(rand() * 9000)}`,
       propertyType: PROPERTY_TYPES[Math.floor(rand() * PROPERTY_TYPES.length)],
       lossType: LOSS_TYPES[Math.floor(rand() * LOSS_TYPES.length)],
       lossDate: isoDate(loss),
