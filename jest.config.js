@@ -20,7 +20,7 @@ module.exports = {
       ...nodeTs,
       displayName: 'server',
       setupFiles: ['<rootDir>/tests/helpers/server-env.ts'],
-      testMatch: ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/tests/shared/**/*.test.ts'],
+      testMatch: ['<rootDir>/tests/server/**/*.test.ts', '<rootDir>/tests/shared/**/*.test.ts', '<rootDir>/tests/reliability/**/*.test.ts'],
     },
     {
       displayName: 'components',
