@@ -31,6 +31,13 @@ ensure_chromium_installed() {
   fi
 }
 
+ensure_haproxy_installed() {
+  if ! command -v haproxy >/dev/null 2>&1 && [ ! -x /usr/sbin/haproxy ]; then
+    log "installing HAProxy from Debian's packages (two-instance tests)"
+    apt_install haproxy
+  fi
+}
+
 DB_DIR="$DATA_DIR/mariadb"
 DB_SOCKET="$DB_DIR/run/mariadb.sock"
 DB_STARTED_HERE=0
