@@ -14,7 +14,11 @@ const client = new S3Client({
   forcePathStyle: true,
   credentials: { accessKeyId: config.s3.accessKeyId, secretAccessKey: config.s3.secretAccessKey },
   maxAttempts: 2,
-  requestHandler: { connectionTimeout: config.s3.connectTimeoutMs, requestTimeout: config.s3.requestTimeoutMs },
+  requestHandler: {
+    connectionTimeout: config.s3.connectTimeoutMs,
+    requestTimeout: config.s3.requestTimeoutMs,
+    throwOnRequestTimeout: true,
+  },
 });
 
 export class StorageUnavailable extends Error {}

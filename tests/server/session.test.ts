@@ -111,7 +111,7 @@ describe('POST /api/session', () => {
     const user = await createUser();
     const blocked = await clientAgent(app).post('/api/session').send({ email: user.email, password: TEST_PASSWORD });
     expect(blocked.status).toBe(429);
-  });
+  }, 60_000);
 
   it('refuses a state-changing request without the same-origin header', async () => {
     const user = await createUser();
