@@ -171,3 +171,15 @@ describe('GET /api/health', () => {
     expect(res.body).toEqual({ status: 'ok', database: 'reachable' });
   });
 });
+
+describe('e-mail matching', () => {
+  it('does not sign in with an accented variant of the address (stored and compared byte for byte)', async () => {
+    const { createUser: make, TEST_PASSWORD: password } = await import('../helpers/factories');
+    const user = await make({ email: `tess-${Date.now()}@example.test` });
+    const variant = user.email.replace('e', 'ë');
+    const res = await clientAgent(app).post('/api/session').send({ email: variant, password });
+    expect(res.status).toBe(401);
+    expect((await clientAgent(app).post('/api/session').send({ email: user.email.toUpperCase(), password })).status).toBe(200);
+    await resetSignInLimits();
+  });
+});
