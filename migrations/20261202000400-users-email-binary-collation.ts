@@ -12,7 +12,10 @@ export async function up(queryInterface: QueryInterface) {
 }
 
 export async function down(queryInterface: QueryInterface) {
-  await queryInterface.sequelize.query('ALTER TABLE users MODIFY email VARCHAR(254) CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci NOT NULL', {
-    type: QueryTypes.RAW,
-  });
+  await queryInterface.sequelize.query(
+    'ALTER TABLE users MODIFY email VARCHAR(254) CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci NOT NULL',
+    {
+      type: QueryTypes.RAW,
+    },
+  );
 }
