@@ -26,6 +26,13 @@ export type UploadItem = {
 const retryable = (error: unknown) =>
   !(error instanceof ApiError) || error.status === 0 || error.status === 408 || error.status === 429 || error.status >= 500;
 
+function sendFile(jobId: number, kind: FileKind, name: string, blob: Blob, onProgress: (fraction: number) => void) {
+  const form = new FormData();
+  form.append('kind', kind);
+  form.append('file', blob, name);
+  return api.upload<{ file: StoredFile }>(`/api/jobs/${jobId}/files`, form, onProgress);
+}
+
 export function useUploadQueue(jobId: number, userId: number) {
   const queryClient = useQueryClient();
   const online = useOnline();
@@ -50,10 +57,7 @@ export function useUploadQueue(jobId: number, userId: number) {
         );
         update(queued.id, { state: 'uploading', fraction: 0, message: undefined });
         try {
-          const form = new FormData();
-          form.append('kind', queued.kind);
-          form.append('file', queued.blob, queued.name);
-          await api.upload<{ file: StoredFile }>(`/api/jobs/${jobId}/files`, form, (fraction) => update(queued.id, { fraction }));
+          await sendFile(jobId, queued.kind, queued.name, queued.blob, (fraction) => update(queued.id, { fraction }));
           await removeDevice(key);
           update(queued.id, { state: 'done', fraction: 1 });
           await invalidateJob(queryClient, jobId);
@@ -98,10 +102,7 @@ export function useUploadQueue(jobId: number, userId: number) {
         // This browser keeps nothing on the device: upload straight away instead.
         setItems((all) => [...all, { id, name, state: 'uploading', fraction: 0, retryable: true }]);
         try {
-          const form = new FormData();
-          form.append('kind', kind);
-          form.append('file', blob, name);
-          await api.upload(`/api/jobs/${jobId}/files`, form, (fraction) => update(id, { fraction }));
+          await sendFile(jobId, kind, name, blob, (fraction) => update(id, { fraction }));
           update(id, { state: 'done', fraction: 1 });
           await invalidateJob(queryClient, jobId);
         } catch (error) {

@@ -34,6 +34,10 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
           { value: 1, short: 'Pass', label: 'Pass' },
         ];
   const needsComment = isBelowFullMarks(criterion, entry.score);
+  const choose = (score: number) => {
+    onFocus();
+    onChange({ ...entry, score });
+  };
   const ref = useRef<View>(null);
   // Focus and the highlighted criterion are one cursor: j/k move focus here, and Tab into the
   // row (onFocus below) makes it the current one, so a digit scores what has focus.
@@ -78,14 +82,8 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
                   role="radio"
                   aria-checked={selected}
                   accessibilityLabel={`${criterion.title}: ${choice.label}`}
-                  onPress={() => {
-                    onFocus();
-                    onChange({ ...entry, score: choice.value });
-                  }}
-                  {...chooseOnKeys(() => {
-                    onFocus();
-                    onChange({ ...entry, score: choice.value });
-                  })}
+                  onPress={() => choose(choice.value)}
+                  {...chooseOnKeys(() => choose(choice.value))}
                   style={[styles.choice, selected && styles.choiceSelected]}
                 >
                   <Text style={[styles.choiceText, selected && { color: colors.surface }]}>{choice.short}</Text>

@@ -16,9 +16,8 @@ import { invitationEmail, passwordResetEmail } from '../mail/templates';
 import { accountKey } from '../middleware/sign-in-limits';
 import { PasswordToken, Session, User } from '../models';
 import { enqueueEmail } from './outbox-service';
-import { normaliseEmail } from './users-service';
+import { hashPassword, normaliseEmail } from './users-service';
 
-const BCRYPT_ROUNDS = 10;
 const INVITE_HOURS = 7 * 24;
 const RESET_HOURS = 1;
 
@@ -65,7 +64,7 @@ export async function requestPasswordReset(email: string) {
 export async function setPasswordWithToken(token: string, password: string) {
   const problem = passwordProblem(password);
   if (problem) throw invalid({ password: problem });
-  const hash = await bcrypt.hash(password, BCRYPT_ROUNDS);
+  const hash = await hashPassword(password);
   return inTransaction(async (transaction) => {
     const row = await PasswordToken.findOne({
       where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
@@ -97,7 +96,7 @@ export async function changePassword(userId: number, currentSessionId: string, c
   }
   const problem = passwordProblem(next);
   if (problem) throw invalid({ newPassword: problem });
-  user.passwordHash = await bcrypt.hash(next, BCRYPT_ROUNDS);
+  user.passwordHash = await hashPassword(next);
   await inTransaction(async (transaction) => {
     await user.save({ transaction });
     await Session.destroy({ where: { userId, sid: { [Op.ne]: currentSessionId } }, transaction });

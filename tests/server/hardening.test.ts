@@ -5,7 +5,16 @@ import request from 'supertest';
 import { createApp } from '../../server/app';
 import { Job, SecondReview, sequelize, StoredFile, User } from '../../server/models';
 import { submitReview } from '../../server/services/review-service';
-import { claimFor, createReview, createSubmittedJob, createUser, fullScores, newJobBody, reworkRequested } from '../helpers/factories';
+import {
+  claimFor,
+  createReview,
+  createSubmittedJob,
+  createUser,
+  fullScores,
+  newJobBody,
+  reworkRequested,
+  secondReviewByAnother,
+} from '../helpers/factories';
 import { clientAgent, countRows, resetSignInLimits, signedInAgent, technicianWithJob } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
 import { PDF_MINIMAL, PNG_1X1 } from '../helpers/sample-files';
@@ -258,18 +267,7 @@ describe('blind second reviews stay blind', () => {
   });
 
   it('refuses to accept a failing score in a blind second review', async () => {
-    const first = await createUser({ role: 'reviewer' });
-    const job = await createSubmittedJob();
-    const review = await createReview(job, first.id, 'accept');
-    const second = await SecondReview.create({
-      jobId: job.id,
-      revisionNumber: 1,
-      firstReviewId: review.id,
-      firstReviewerId: first.id,
-      secondReviewId: null,
-      claimedById: null,
-      claimExpiresAt: null,
-    });
+    const second = await secondReviewByAnother();
     const { agent } = await signedInAgent(app, 'reviewer');
     await agent.post(`/api/second-reviews/${second.id}/claim`);
     const res = await agent.post(`/api/second-reviews/${second.id}/reviews`).send({ decision: 'accept', scores: await zeroScores() });
