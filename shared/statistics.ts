@@ -95,3 +95,21 @@ export function landisKoch(kappa: number): string {
   if (kappa <= 0.8) return 'Substantial';
   return 'Almost perfect';
 }
+
+// The median of values given as (value, count) pairs, without expanding them: the middle
+// value, or the mean of the two middle ones for an even total (as MariaDB's MEDIAN does).
+export function medianOfCounts(counts: { value: number; n: number }[]): number | null {
+  const sorted = counts.filter((c) => c.n > 0).sort((a, b) => a.value - b.value);
+  const total = sorted.reduce((s, c) => s + c.n, 0);
+  if (total === 0) return null;
+  const at = (rank: number) => {
+    let seen = 0;
+    for (const c of sorted) {
+      seen += c.n;
+      if (rank < seen) return c.value;
+    }
+    return sorted[sorted.length - 1].value;
+  };
+  const middle = Math.floor(total / 2);
+  return total % 2 ? at(middle) : (at(middle - 1) + at(middle)) / 2;
+}

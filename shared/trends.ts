@@ -63,3 +63,18 @@ export function paretoBars(rows: { label: string; count: number }[]): ParetoBar[
     return { ...r, cumulativeShare: total ? running / total : 0 };
   });
 }
+
+const DAY_MS = 86_400_000;
+const isoDay = (t: number) => new Date(t).toISOString().slice(0, 10);
+
+// Trends are kept per week (Monday to Sunday, UTC): a period widens to the whole weeks it
+// touches, and the answer states the span it covers.
+export function weekSpan(from: string, to: string): { fromWeek: string; toWeek: string; from: string; to: string } {
+  const monday = (day: string) => {
+    const t = Date.parse(`${day}T00:00:00Z`);
+    return t - ((new Date(t).getUTCDay() + 6) % 7) * DAY_MS;
+  };
+  const first = monday(from);
+  const last = monday(to);
+  return { fromWeek: isoDay(first), toWeek: isoDay(last), from: isoDay(first), to: isoDay(last + 6 * DAY_MS) };
+}

@@ -1,9 +1,10 @@
-// Quality trends. Counting and averaging happen in MariaDB (GROUP BY over indexed columns);
-// Node only turns the aggregates into intervals, control limits and kappa.
+// Quality trends, read from the weekly rollups (see the trend rollups migration): a period of
+// a year is a few thousand summed rows, whatever the number of reviews and scores behind it.
+// Node turns the sums into rates, intervals, control limits, exact medians and kappa.
 import { QueryTypes } from 'sequelize';
 
 import { DECISIONS } from '../../shared/review';
-import { cohenKappa, landisKoch, pChart, wilsonInterval } from '../../shared/statistics';
+import { cohenKappa, landisKoch, medianOfCounts, pChart, wilsonInterval } from '../../shared/statistics';
 import {
   type Calibration,
   MIN_REVIEWS_FOR_RATES,
@@ -12,24 +13,48 @@ import {
   type TeamRow,
   type TechnicianTrends,
   type TrendsQuery,
+  weekSpan,
 } from '../../shared/trends';
 import { notFound } from '../errors';
 import { sequelize, User } from '../models';
 import { currentRubric } from './rubric-service';
 
 type Filters = TrendsQuery;
+type Params = Record<string, unknown>;
 
-const select = <T extends object>(sql: string, replacements: Filters) =>
-  sequelize.query<T>(sql, { replacements: replacements as Record<string, unknown>, type: QueryTypes.SELECT });
+const select = <T extends object>(sql: string, replacements: Params) => sequelize.query<T>(sql, { replacements, type: QueryTypes.SELECT });
 const num = (v: unknown) => (v === null || v === undefined ? null : Number(v));
+const ratio = (sum: unknown, n: unknown) => (Number(n) ? Number(sum) / Number(n) : null);
 
-// Shared WHERE for primary reviews in the period (and optionally one technician, one rubric version).
-function primaryWhere(f: Filters) {
-  return `r.kind = 'primary' AND r.decided_at >= :from AND r.decided_at < DATE_ADD(:to, INTERVAL 1 DAY)
-    ${f.technicianId ? 'AND j.technician_id = :technicianId' : ''}
-    ${f.rubricVersion ? 'AND ru.version = :rubricVersion' : ''}`;
+// The rollup rows of the period, optionally for one technician and one rubric version.
+function rollupWhere(f: Filters) {
+  const span = weekSpan(f.from, f.to);
+  const where = `t.week BETWEEN :fromWeek AND :toWeek
+    ${f.technicianId ? 'AND t.technician_id = :technicianId' : ''}
+    ${f.rubricVersion ? 'AND t.rubric_version = :rubricVersion' : ''}`;
+  return { span, where, params: { ...f, fromWeek: span.fromWeek, toWeek: span.toWeek } as Params };
 }
-const FROM_PRIMARY = 'FROM reviews r JOIN jobs j ON j.id = r.job_id JOIN rubrics ru ON ru.id = r.rubric_id';
+
+const TOTALS = `SUM(t.reviews) AS reviews, SUM(t.score_sum) AS score_sum, SUM(t.score_n) AS score_n,
+  SUM(t.first_total) AS first_total, SUM(t.first_accepted) AS first_accepted, SUM(t.rework) AS rework,
+  SUM(t.recaptures) AS recaptures, SUM(t.accepted) AS accepted, SUM(t.accepted_revision_sum) AS accepted_revision_sum`;
+type Totals = {
+  reviews: unknown;
+  score_sum: unknown;
+  score_n: unknown;
+  first_total: unknown;
+  first_accepted: unknown;
+  rework: unknown;
+  recaptures: unknown;
+  accepted: unknown;
+  accepted_revision_sum: unknown;
+};
+
+function medianByKey(rows: { k: number; value: number; n: number }[]) {
+  const groups = new Map<number, { value: number; n: number }[]>();
+  for (const r of rows) groups.set(Number(r.k), [...(groups.get(Number(r.k)) ?? []), { value: Number(r.value), n: Number(r.n) }]);
+  return new Map([...groups].map(([k, counts]) => [k, medianOfCounts(counts)]));
+}
 
 export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
   let technician: { id: number; name: string } | null = null;
@@ -38,137 +63,110 @@ export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
     if (!user || user.role !== 'technician') throw notFound('Technician');
     technician = { id: user.id, name: user.name };
   }
-  const where = primaryWhere(f);
-  const params = { ...f };
+  const { span, where, params } = rollupWhere(f);
 
-  const weekly = await select<{ week: string; reviews: number; mean_score: string | null; rework: number }>(
-    `SELECT DATE_FORMAT(DATE_SUB(DATE(r.decided_at), INTERVAL WEEKDAY(r.decided_at) DAY), '%Y-%m-%d') AS week,
-            COUNT(*) AS reviews, AVG(r.score) AS mean_score, SUM(r.decision = 'rework') AS rework
-     ${FROM_PRIMARY} WHERE ${where} GROUP BY week ORDER BY week`,
+  const weekly = await select<{ week: string; reviews: unknown; score_sum: unknown; score_n: unknown; rework: unknown }>(
+    `SELECT DATE_FORMAT(t.week, '%Y-%m-%d') AS week, SUM(t.reviews) AS reviews, SUM(t.score_sum) AS score_sum,
+            SUM(t.score_n) AS score_n, SUM(t.rework) AS rework
+     FROM trend_technician_weeks t WHERE ${where} GROUP BY t.week ORDER BY t.week`,
     params,
   );
-
-  const [totals] = (await select<{
-    reviews: number;
-    first_total: number;
-    first_accepted: number;
-    recaptures: number;
-    mean_revisions: string | null;
-  }>(
-    `SELECT COUNT(*) AS reviews,
-            SUM(r.revision_number = 1) AS first_total,
-            SUM(r.revision_number = 1 AND r.decision = 'accept') AS first_accepted,
-            SUM(r.decision = 'recapture') AS recaptures,
-            AVG(CASE WHEN r.decision = 'accept' THEN r.revision_number END) AS mean_revisions
-     ${FROM_PRIMARY} WHERE ${where}`,
-    params,
-  )) as [{ reviews: number; first_total: number; first_accepted: number; recaptures: number; mean_revisions: string | null }];
-
-  const medianRows = await select<{ median_hours: string | null }>(
-    `SELECT MEDIAN(TIMESTAMPDIFF(HOUR, j.site_visit_date, r.decided_at)) OVER () AS median_hours
-     ${FROM_PRIMARY} WHERE ${where} AND r.decision = 'accept' AND j.site_visit_date IS NOT NULL LIMIT 1`,
+  const [totals] = (await select<Totals>(`SELECT ${TOTALS} FROM trend_technician_weeks t WHERE ${where}`, params)) as [Totals];
+  const hours = await select<{ value: number; n: number }>(
+    `SELECT t.hours AS value, SUM(t.n) AS n FROM trend_turnaround_weeks t WHERE ${where} GROUP BY t.hours`,
     params,
   );
-
-  const criteria = await select<{ criterion_key: string; n: number }>(
-    `SELECT rs.criterion_key, COUNT(*) AS n ${FROM_PRIMARY} JOIN review_scores rs ON rs.review_id = r.id
-     WHERE ${where} AND rs.score < rs.max_score GROUP BY rs.criterion_key`,
+  const criteria = await select<{ criterion_key: string; n: unknown }>(
+    `SELECT t.criterion_key, SUM(t.below_full) AS n FROM trend_criterion_weeks t WHERE ${where} GROUP BY t.criterion_key`,
     params,
   );
-  const reasons = await select<{ stock_reason: string; n: number }>(
-    `SELECT rs.stock_reason, COUNT(*) AS n ${FROM_PRIMARY} JOIN review_scores rs ON rs.review_id = r.id
-     WHERE ${where} AND rs.stock_reason IS NOT NULL GROUP BY rs.stock_reason`,
+  const reasons = await select<{ stock_reason: string; n: unknown }>(
+    `SELECT t.stock_reason, SUM(t.n) AS n FROM trend_reason_weeks t WHERE ${where} GROUP BY t.stock_reason`,
     params,
   );
   const titles = new Map((await currentRubric()).criteria.map((c) => [c.key, c.title]));
 
-  const reviews = Number(totals.reviews);
+  const reviews = Number(totals.reviews ?? 0);
   const firstTotal = Number(totals.first_total ?? 0);
   const firstAccepted = Number(totals.first_accepted ?? 0);
   return {
-    period: { from: f.from, to: f.to },
+    period: { from: span.from, to: span.to },
     technician,
     reviews,
     tooFew: reviews < MIN_REVIEWS_FOR_RATES,
-    weekly: weekly.map((w) => ({ week: w.week, reviews: Number(w.reviews), meanScore: num(w.mean_score), rework: Number(w.rework) })),
+    weekly: weekly.map((w) => ({ week: w.week, reviews: Number(w.reviews), meanScore: ratio(w.score_sum, w.score_n), rework: Number(w.rework) })),
     reworkChart: pChart(weekly.map((w) => ({ label: w.week, n: Number(w.reviews), defects: Number(w.rework) }))),
     firstPassYield: { accepted: firstAccepted, total: firstTotal, interval: wilsonInterval(firstAccepted, firstTotal) },
-    meanRevisionsToAcceptance: num(totals.mean_revisions),
+    meanRevisionsToAcceptance: ratio(totals.accepted_revision_sum, totals.accepted),
     recaptures: Number(totals.recaptures ?? 0),
-    medianHoursVisitToAcceptance: num(medianRows[0]?.median_hours),
+    medianHoursVisitToAcceptance: medianOfCounts(hours.map((h) => ({ value: Number(h.value), n: Number(h.n) }))),
     paretoCriteria: paretoBars(criteria.map((c) => ({ label: titles.get(c.criterion_key) ?? c.criterion_key, count: Number(c.n) }))),
     paretoReasons: paretoBars(reasons.map((r) => ({ label: r.stock_reason, count: Number(r.n) }))),
   };
 }
 
 export async function teamTable(f: Filters): Promise<TeamRow[]> {
-  const where = primaryWhere({ ...f, technicianId: undefined });
-  const rows = await select<{
-    id: number;
-    name: string;
-    reviews: number;
-    mean_score: string | null;
-    first_total: number;
-    first_accepted: number;
-    rework: number;
-    recaptures: number;
-    mean_revisions: string | null;
-  }>(
-    `SELECT u.id, u.name, COUNT(x.id) AS reviews, AVG(x.score) AS mean_score,
-            SUM(x.revision_number = 1) AS first_total, SUM(x.revision_number = 1 AND x.decision = 'accept') AS first_accepted,
-            SUM(x.decision = 'rework') AS rework, SUM(x.decision = 'recapture') AS recaptures,
-            AVG(CASE WHEN x.decision = 'accept' THEN x.revision_number END) AS mean_revisions
-     FROM users u
-     LEFT JOIN (SELECT r.id, r.score, r.revision_number, r.decision, j.technician_id ${FROM_PRIMARY} WHERE ${where}) x ON x.technician_id = u.id
-     WHERE u.role = 'technician' AND u.active = 1
-     GROUP BY u.id, u.name ORDER BY u.name`,
-    f,
+  const { where, params } = rollupWhere({ ...f, technicianId: undefined });
+  const technicians = await User.findAll({
+    where: { role: 'technician', active: true },
+    attributes: ['id', 'name'],
+    order: [['name', 'ASC']],
+  });
+  const sums = await select<Totals & { technician_id: number }>(
+    `SELECT t.technician_id, ${TOTALS} FROM trend_technician_weeks t WHERE ${where} GROUP BY t.technician_id`,
+    params,
   );
-  const medians = await select<{ technician_id: number; median_hours: string }>(
-    `SELECT DISTINCT j.technician_id, MEDIAN(TIMESTAMPDIFF(HOUR, j.site_visit_date, r.decided_at)) OVER (PARTITION BY j.technician_id) AS median_hours
-     ${FROM_PRIMARY} WHERE ${where} AND r.decision = 'accept' AND j.site_visit_date IS NOT NULL`,
-    f,
+  const hours = await select<{ k: number; value: number; n: number }>(
+    `SELECT t.technician_id AS k, t.hours AS value, SUM(t.n) AS n FROM trend_turnaround_weeks t WHERE ${where}
+     GROUP BY t.technician_id, t.hours`,
+    params,
   );
-  const medianOf = new Map(medians.map((m) => [Number(m.technician_id), Number(m.median_hours)]));
-  return rows.map((r) => {
-    const reviews = Number(r.reviews);
-    const firstTotal = Number(r.first_total ?? 0);
-    const firstAccepted = Number(r.first_accepted ?? 0);
+  const sumsOf = new Map(sums.map((s) => [Number(s.technician_id), s]));
+  const medianOf = medianByKey(hours);
+  return technicians.map((u) => {
+    const r = sumsOf.get(u.id);
+    const reviews = Number(r?.reviews ?? 0);
+    const firstTotal = Number(r?.first_total ?? 0);
+    const firstAccepted = Number(r?.first_accepted ?? 0);
     return {
-      technician: { id: r.id, name: r.name },
+      technician: { id: u.id, name: u.name },
       reviews,
-      meanScore: num(r.mean_score),
+      meanScore: r ? ratio(r.score_sum, r.score_n) : null,
       firstPassYield: { accepted: firstAccepted, total: firstTotal, interval: wilsonInterval(firstAccepted, firstTotal) },
-      reworkRate: reviews ? Number(r.rework) / reviews : null,
-      recaptures: Number(r.recaptures ?? 0),
-      meanRevisionsToAcceptance: num(r.mean_revisions),
-      medianHoursVisitToAcceptance: medianOf.get(r.id) ?? null,
+      reworkRate: reviews ? Number(r!.rework) / reviews : null,
+      recaptures: Number(r?.recaptures ?? 0),
+      meanRevisionsToAcceptance: r ? ratio(r.accepted_revision_sum, r.accepted) : null,
+      medianHoursVisitToAcceptance: medianOf.get(u.id) ?? null,
       tooFew: reviews < MIN_REVIEWS_FOR_RATES,
     };
   });
 }
 
 export async function reviewerTable(f: Filters): Promise<ReviewerRow[]> {
-  const rows = await select<{ id: number; name: string; reviews: number; late: number }>(
-    `SELECT u.id, u.name, COUNT(r.id) AS reviews, SUM(r.decided_at > r.due_at) AS late
-     FROM users u LEFT JOIN reviews r ON r.reviewer_id = u.id AND r.kind = 'primary'
-       AND r.decided_at >= :from AND r.decided_at < DATE_ADD(:to, INTERVAL 1 DAY)
-     WHERE u.role = 'reviewer' AND u.active = 1 GROUP BY u.id, u.name ORDER BY u.name`,
-    f,
+  const span = weekSpan(f.from, f.to);
+  const params = { fromWeek: span.fromWeek, toWeek: span.toWeek };
+  const reviewers = await User.findAll({ where: { role: 'reviewer', active: true }, attributes: ['id', 'name'], order: [['name', 'ASC']] });
+  const sums = await select<{ reviewer_id: number; reviews: unknown; late: unknown }>(
+    `SELECT t.reviewer_id, SUM(t.reviews) AS reviews, SUM(t.late) AS late FROM trend_reviewer_weeks t
+     WHERE t.week BETWEEN :fromWeek AND :toWeek GROUP BY t.reviewer_id`,
+    params,
   );
-  const medians = await select<{ reviewer_id: number; median_minutes: string }>(
-    `SELECT DISTINCT r.reviewer_id, MEDIAN(TIMESTAMPDIFF(MINUTE, r.claimed_at, r.decided_at)) OVER (PARTITION BY r.reviewer_id) AS median_minutes
-     FROM reviews r WHERE r.kind = 'primary' AND r.claimed_at IS NOT NULL
-       AND r.decided_at >= :from AND r.decided_at < DATE_ADD(:to, INTERVAL 1 DAY)`,
-    f,
+  const minutes = await select<{ k: number; value: number; n: number }>(
+    `SELECT t.reviewer_id AS k, t.minutes AS value, SUM(t.n) AS n FROM trend_reviewer_minutes t
+     WHERE t.week BETWEEN :fromWeek AND :toWeek GROUP BY t.reviewer_id, t.minutes`,
+    params,
   );
-  const medianOf = new Map(medians.map((m) => [Number(m.reviewer_id), Number(m.median_minutes)]));
-  return rows.map((r) => ({
-    reviewer: { id: r.id, name: r.name },
-    reviews: Number(r.reviews),
-    medianMinutesClaimToDecision: medianOf.get(r.id) ?? null,
-    lateShare: Number(r.reviews) ? Number(r.late) / Number(r.reviews) : null,
-  }));
+  const sumsOf = new Map(sums.map((s) => [Number(s.reviewer_id), s]));
+  const medianOf = medianByKey(minutes);
+  return reviewers.map((u) => {
+    const reviews = Number(sumsOf.get(u.id)?.reviews ?? 0);
+    return {
+      reviewer: { id: u.id, name: u.name },
+      reviews,
+      medianMinutesClaimToDecision: medianOf.get(u.id) ?? null,
+      lateShare: reviews ? Number(sumsOf.get(u.id)!.late) / reviews : null,
+    };
+  });
 }
 
 const SCORE_LEVELS = [0, 1, 2, 3, 4];
