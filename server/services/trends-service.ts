@@ -94,7 +94,12 @@ export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
     technician,
     reviews,
     tooFew: reviews < MIN_REVIEWS_FOR_RATES,
-    weekly: weekly.map((w) => ({ week: w.week, reviews: Number(w.reviews), meanScore: ratio(w.score_sum, w.score_n), rework: Number(w.rework) })),
+    weekly: weekly.map((w) => ({
+      week: w.week,
+      reviews: Number(w.reviews),
+      meanScore: ratio(w.score_sum, w.score_n),
+      rework: Number(w.rework),
+    })),
     reworkChart: pChart(weekly.map((w) => ({ label: w.week, n: Number(w.reviews), defects: Number(w.rework) }))),
     firstPassYield: { accepted: firstAccepted, total: firstTotal, interval: wilsonInterval(firstAccepted, firstTotal) },
     meanRevisionsToAcceptance: ratio(totals.accepted_revision_sum, totals.accepted),
