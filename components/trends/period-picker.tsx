@@ -5,6 +5,7 @@ import type { Period } from '@/components/queries/trends';
 import { ChoiceField } from '@/components/ui/choice-field';
 import { Select } from '@/components/ui/select';
 import { space } from '@/components/ui/theme';
+import { weekSpan } from '@/shared/trends';
 
 const SPANS = [
   { value: '4', label: 'Last 4 weeks' },
@@ -12,10 +13,13 @@ const SPANS = [
   { value: '26', label: 'Last 26 weeks' },
 ];
 
+// The last N whole weeks, this one included: trends are kept per Monday-to-Sunday week.
 export function periodFor(weeks: number): Period {
-  const to = new Date();
-  const from = new Date(to.getTime() - weeks * 7 * 86_400_000);
-  return { from: from.toISOString().slice(0, 10), to: to.toISOString().slice(0, 10) };
+  const today = new Date().toISOString().slice(0, 10);
+  const { from } = weekSpan(today, today);
+  const start = new Date(Date.parse(`${from}T00:00:00Z`) - (weeks - 1) * 7 * 86_400_000).toISOString().slice(0, 10);
+  const span = weekSpan(start, today);
+  return { from: span.from, to: span.to };
 }
 
 export function PeriodPicker({

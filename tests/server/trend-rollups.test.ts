@@ -49,7 +49,7 @@ it(`equals the raw aggregates after a random series of decisions (seed ${SEED})`
   // Decisions through the API: accept at full marks, or rework with one to three criteria short.
   for (let i = 0; i < 12; i++) {
     const job = await claimFor(await createSubmittedJob({ technicianId: pick(technicians).id }), reviewer.id);
-    const scores = await fullScores();
+    const scores: { key: string; score: number | null; stockReason: string | null; comment: string }[] = await fullScores();
     const decision = rand() < 0.5 ? 'accept' : 'rework';
     if (decision === 'rework') {
       const applicable = scores.filter((s) => s.score !== null);
