@@ -117,3 +117,21 @@ function plural(n: number, word: string) {
 }
 
 export const FINISHED_STATUSES: JobStatus[] = ['accepted', 'recapture_required'];
+
+// The job list's server-side sorts, each served by an index; the due date runs newest first.
+export const JOB_SORTS = ['due', 'claim', 'technician', 'visit'] as const;
+export type JobSort = (typeof JOB_SORTS)[number];
+export const JOB_SORT_DEFAULT_DIR: Record<JobSort, 'asc' | 'desc'> = { due: 'desc', claim: 'asc', technician: 'asc', visit: 'desc' };
+
+export type JobListQuery = {
+  status?: JobStatus[];
+  technicianId?: number;
+  q?: string;
+  sort?: JobSort;
+  dir?: 'asc' | 'desc';
+  page?: number;
+  pageSize?: number;
+};
+
+// totalIsAtLeast: counting stopped at `total`; there are more.
+export type JobPage = { jobs: JobSummary[]; total: number; totalIsAtLeast: boolean; page: number; pageSize: number };

@@ -2,6 +2,7 @@
 import { CAMERA_CLASSES } from './capture-record';
 import { LOSS_TYPES, PRIORITIES } from './jobs';
 import { QUEUE_SORTS, QUEUE_STATUSES } from './review';
+import { SEARCH_MAX_LENGTH } from './search';
 
 export const QUEUE_PARAM_KEYS = [
   'status',
@@ -11,6 +12,7 @@ export const QUEUE_PARAM_KEYS = [
   'cameraClass',
   'submission',
   'claimedByMe',
+  'q',
   'sort',
   'dir',
   'page',
@@ -25,6 +27,7 @@ const VALID: Partial<Record<keyof QueueParams, (v: string) => boolean>> = {
   cameraClass: (v) => (CAMERA_CLASSES as readonly string[]).includes(v),
   submission: (v) => v === 'first' || v === 'resubmission',
   claimedByMe: (v) => v === 'true',
+  q: (v) => v.trim().length > 0 && v.length <= SEARCH_MAX_LENGTH,
   sort: (v) => (QUEUE_SORTS as readonly string[]).includes(v),
   dir: (v) => v === 'asc' || v === 'desc',
   page: (v) => /^[1-9]\d*$/.test(v),

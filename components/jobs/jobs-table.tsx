@@ -2,26 +2,61 @@ import { useRouter } from 'expo-router';
 import { useMemo } from 'react';
 
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
-import { type JobSummary, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
+import {
+  JOB_SORT_DEFAULT_DIR,
+  type JobSort,
+  type JobSummary,
+  LOSS_TYPE_LABELS,
+  PRIORITY_LABELS,
+  PROPERTY_TYPE_LABELS,
+} from '@/shared/jobs';
 
 import { DueText } from './due-text';
 import { StatusBadge } from './status-badge';
 
-export function JobsTable({ jobs }: { jobs: JobSummary[] }) {
+type Sorted = { sort: JobSort; dir: 'asc' | 'desc' } | null;
+
+// Sorted on the server: only the columns an index serves can be sorted.
+export function JobsTable({
+  jobs,
+  sort,
+  dir,
+  onSort,
+}: {
+  jobs: JobSummary[];
+  sort?: JobSort;
+  dir?: 'asc' | 'desc';
+  onSort: (next: Sorted) => void;
+}) {
   const router = useRouter();
   const columns = useMemo<DataTableColumn<JobSummary>[]>(
     () => [
-      { accessorKey: 'claimReference', header: 'Claim', meta: { width: 140 } },
-      { id: 'address', accessorFn: (j) => `${j.street}, ${j.city}`, header: 'Property', meta: { width: 240 } },
+      { id: 'claim', accessorKey: 'claimReference', header: 'Claim', meta: { width: 140 } },
+      { id: 'address', accessorFn: (j) => `${j.street}, ${j.city}`, header: 'Property', enableSorting: false, meta: { width: 240 } },
       { id: 'technician', accessorFn: (j) => j.technician.name, header: 'Technician', meta: { width: 170 } },
-      { id: 'lossType', accessorFn: (j) => LOSS_TYPE_LABELS[j.lossType], header: 'Loss', meta: { width: 90 } },
-      { id: 'propertyType', accessorFn: (j) => PROPERTY_TYPE_LABELS[j.propertyType], header: 'Type', meta: { width: 150 } },
-      { id: 'priority', accessorFn: (j) => PRIORITY_LABELS[j.priority], header: 'Priority', meta: { width: 150 } },
-      { accessorKey: 'status', header: 'Status', meta: { width: 170 }, cell: ({ row }) => <StatusBadge status={row.original.status} /> },
-      { accessorKey: 'dueAt', header: 'Due', meta: { width: 190 }, cell: ({ row }) => <DueText job={row.original} /> },
+      { id: 'lossType', accessorFn: (j) => LOSS_TYPE_LABELS[j.lossType], header: 'Loss', enableSorting: false, meta: { width: 90 } },
+      {
+        id: 'propertyType',
+        accessorFn: (j) => PROPERTY_TYPE_LABELS[j.propertyType],
+        header: 'Type',
+        enableSorting: false,
+        meta: { width: 150 },
+      },
+      { id: 'priority', accessorFn: (j) => PRIORITY_LABELS[j.priority], header: 'Priority', enableSorting: false, meta: { width: 150 } },
+      {
+        id: 'status',
+        accessorKey: 'status',
+        header: 'Status',
+        enableSorting: false,
+        meta: { width: 170 },
+        cell: ({ row }) => <StatusBadge status={row.original.status} />,
+      },
+      { id: 'visit', accessorFn: (j) => j.siteVisitDate ?? '', header: 'Site visit', meta: { width: 120 } },
+      { id: 'due', accessorKey: 'dueAt', header: 'Due', meta: { width: 190 }, cell: ({ row }) => <DueText job={row.original} /> },
     ],
     [],
   );
+  const current = sort ?? 'due';
   return (
     <DataTable
       label="Jobs"
@@ -29,7 +64,8 @@ export function JobsTable({ jobs }: { jobs: JobSummary[] }) {
       data={jobs}
       emptyText="No jobs match."
       getRowId={(j) => String(j.id)}
-      initialSorting={[{ id: 'dueAt', desc: true }]}
+      sorting={[{ id: current, desc: (dir ?? JOB_SORT_DEFAULT_DIR[current]) === 'desc' }]}
+      onSortingChange={(next) => onSort(next[0] ? { sort: next[0].id as JobSort, dir: next[0].desc ? 'desc' : 'asc' } : null)}
       onRowPress={(j) => router.push(`/jobs/${j.id}` as never)}
     />
   );

@@ -4,10 +4,10 @@ import { keepPreviousData, type QueryClient, useMutation, useQuery, useQueryClie
 import { withDeviceCopy } from '@/components/device/device-copy';
 import { api } from '@/components/lib/api-client';
 import type { JobDetail, RevisionView } from '@/shared/api-types';
-import type { JobInput, JobStatus, JobSummary, Priority } from '@/shared/jobs';
+import type { JobInput, JobListQuery, JobPage, JobSummary, Priority } from '@/shared/jobs';
 import type { StationAnalysis } from '@/shared/station-analysis';
 
-export type JobFilters = { status?: JobStatus[]; technicianId?: number };
+export type JobFilters = JobListQuery;
 
 export const jobKeys = {
   root: ['jobs'] as const,
@@ -26,15 +26,25 @@ export function invalidateJobs(queryClient: QueryClient) {
   return queryClient.invalidateQueries({ queryKey: jobKeys.root });
 }
 
-export function useJobsQuery(filters: JobFilters) {
+// The list's query string, in a stable order (a stable cache key and device copy).
+export function jobListSearch(filters: JobFilters): string {
   const parts = [
     filters.status?.length ? `status=${filters.status.join(',')}` : '',
     filters.technicianId ? `technicianId=${filters.technicianId}` : '',
+    filters.q ? `q=${encodeURIComponent(filters.q)}` : '',
+    filters.sort ? `sort=${filters.sort}` : '',
+    filters.dir ? `dir=${filters.dir}` : '',
+    filters.page && filters.page > 1 ? `page=${filters.page}` : '',
+    filters.pageSize ? `pageSize=${filters.pageSize}` : '',
   ].filter(Boolean);
-  const search = parts.length ? `?${parts.join('&')}` : '';
+  return parts.length ? `?${parts.join('&')}` : '';
+}
+
+export function useJobsQuery(filters: JobFilters) {
+  const search = jobListSearch(filters);
   return useQuery({
     queryKey: jobKeys.list(filters),
-    queryFn: async () => (await withDeviceCopy(`/api/jobs${search}`, () => api.get<{ jobs: JobSummary[] }>(`/api/jobs${search}`))).jobs,
+    queryFn: () => withDeviceCopy(`/api/jobs${search}`, () => api.get<JobPage>(`/api/jobs${search}`)),
     placeholderData: keepPreviousData,
   });
 }

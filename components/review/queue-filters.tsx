@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
 
+import { SearchBox } from '@/components/ui/search-box';
 import { Select } from '@/components/ui/select';
 import { space } from '@/components/ui/theme';
 import { CAMERA_CLASS_LABELS, CAMERA_CLASSES } from '@/shared/capture-record';
@@ -22,6 +23,7 @@ export function QueueFilters({
   const set = (key: keyof QueueParams) => (value: string) => onChange({ [key]: value, page: '' });
   return (
     <View style={styles.bar} role="group" aria-label="Queue filters">
+      <SearchBox label="Search claim, address or technician" value={params.q ?? ''} onSearch={(q) => onChange({ q, page: '' })} />
       <Select
         label="Status"
         value={params.status ?? ''}

@@ -13,6 +13,7 @@ import { Button } from '@/components/ui/button';
 import { DataTable } from '@/components/ui/data-table';
 import { HelpOverlay } from '@/components/ui/help-overlay';
 import { Notice } from '@/components/ui/notice';
+import { pageCount, Pager } from '@/components/ui/pager';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
@@ -53,7 +54,7 @@ export function QueueScreen() {
 
   const rows = queue.data?.rows ?? [];
   const page = queue.data?.page ?? 1;
-  const pages = queue.data ? Math.max(1, Math.ceil(queue.data.total / queue.data.pageSize)) : 1;
+  const pages = queue.data ? pageCount(queue.data.total, queue.data.pageSize) : 1;
   const setParams = (changes: QueueParams) => router.setParams(changes as never);
   const open = (row: QueueRow | undefined) => row && router.push(`/queue/${row.id}` as never);
   const claimAndOpen = async (row: QueueRow | undefined) => {
@@ -94,7 +95,7 @@ export function QueueScreen() {
   return (
     <Screen
       title="Queue"
-      subtitle="Capture records waiting for review. Overdue first, then by due time and priority."
+      subtitle="Capture records waiting for review, by due time (overdue first), then priority."
       actions={wide ? <Button label="Keyboard keys (?)" tone="secondary" onPress={() => setHelp(true)} /> : null}
     >
       <Text role="status">
@@ -119,11 +120,13 @@ export function QueueScreen() {
           setParams({ sort: (next[0]?.id as QueueSort | undefined) ?? '', dir: next[0]?.desc ? 'desc' : 'asc', page: '' })
         }
       />
-      <View style={styles.pager}>
-        <Button label="Previous page" tone="secondary" disabled={page <= 1} onPress={() => setParams({ page: String(page - 1) })} />
-        <Text>{`Page ${page} of ${pages} · ${queue.data?.total ?? 0} jobs`}</Text>
-        <Button label="Next page" tone="secondary" disabled={page >= pages} onPress={() => setParams({ page: String(page + 1) })} />
-      </View>
+      <Pager
+        page={page}
+        pageSize={queue.data?.pageSize ?? 25}
+        total={queue.data?.total ?? 0}
+        noun="jobs"
+        onPage={(p) => setParams({ page: String(p) })}
+      />
       {isReviewer && rows[selected] ? (
         <View style={styles.selectedBar}>
           <Text>{`Selected: ${rows[selected].claimReference}`}</Text>
@@ -143,7 +146,6 @@ export function QueueScreen() {
 }
 
 const styles = StyleSheet.create({
-  pager: { flexDirection: 'row', alignItems: 'center', gap: space.md, flexWrap: 'wrap' },
   selectedBar: {
     flexDirection: 'row',
     alignItems: 'center',

@@ -4,7 +4,7 @@ import multer from 'multer';
 
 import type { CaptureRecord } from '../../shared/capture-record';
 import { FILE_KINDS, type FileKind, fileTooLargeMessage } from '../../shared/files';
-import { JOB_STATUSES, type JobStatus, pickJobInput } from '../../shared/jobs';
+import { JOB_STATUSES, type JobSort, type JobStatus, pickJobInput } from '../../shared/jobs';
 import { config } from '../config';
 import { HttpError, invalid } from '../errors';
 import { requireBaseVersion } from '../middleware/base-version';
@@ -15,7 +15,7 @@ import { detachFile, uploadFile } from '../services/files-service';
 import { createJob, getJobDetail, listJobs, updateJob } from '../services/jobs-service';
 import { stationAnalysisFor } from '../services/station-service';
 import { captureRecordRules } from '../validators/capture-record';
-import { jobCreateRules, jobUpdateRules } from '../validators/job';
+import { jobCreateRules, jobListRules, jobUpdateRules } from '../validators/job';
 
 export const jobsRouter = Router();
 
@@ -33,11 +33,21 @@ jobsRouter.get(
       .isString()
       .custom((v: string) => v.split(',').every((s) => (JOB_STATUSES as readonly string[]).includes(s))),
     query('technicianId', 'Must be a user id').optional().isInt({ min: 1 }).toInt(),
+    ...jobListRules,
   ),
   async (req, res) => {
-    const status = typeof req.query.status === 'string' ? (req.query.status.split(',') as JobStatus[]) : undefined;
-    const technicianId = req.query.technicianId ? Number(req.query.technicianId) : undefined;
-    res.json({ jobs: await listJobs(req.user!, { status, technicianId }) });
+    const q = req.query as Record<string, string | undefined>;
+    res.json(
+      await listJobs(req.user!, {
+        status: q.status ? (q.status.split(',') as JobStatus[]) : undefined,
+        technicianId: q.technicianId ? Number(q.technicianId) : undefined,
+        q: q.q || undefined,
+        sort: q.sort as JobSort | undefined,
+        dir: q.dir as 'asc' | 'desc' | undefined,
+        page: q.page ? Number(q.page) : undefined,
+        pageSize: q.pageSize ? Number(q.pageSize) : undefined,
+      }),
+    );
   },
 );
 

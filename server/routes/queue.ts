@@ -18,6 +18,7 @@ queueRouter.get('/', requireRole('reviewer', 'manager'), validate(...queueQueryR
       pageSize: Number(q.pageSize ?? 25),
       sort: q.sort as QueueSort | undefined,
       dir: q.dir === 'desc' ? 'desc' : 'asc',
+      search: q.q || undefined,
       filters: {
         status: q.status ? (q.status.split(',') as JobStatus[]) : undefined,
         technicianId: q.technicianId ? Number(q.technicianId) : undefined,

@@ -1,14 +1,23 @@
-import { col, fn, Op, type WhereOptions } from 'sequelize';
+import { col, fn, Op } from 'sequelize';
 
 import type { JobDetail } from '../../shared/api-types';
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import { effectiveDueAt } from '../../shared/due-clock';
-import { type JobInput, type JobStatus, type JobSummary, pickJobInput } from '../../shared/jobs';
+import {
+  JOB_SORT_DEFAULT_DIR,
+  type JobInput,
+  type JobListQuery,
+  type JobPage,
+  type JobSort,
+  type JobSummary,
+  pickJobInput,
+} from '../../shared/jobs';
 import { inTransaction } from '../db';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
+import { countJobs, inIdOrder, type JobPageQuery, pageOfJobIds } from './job-page-query';
 
 type Actor = Express.User;
 
@@ -31,20 +40,63 @@ function toSummary(job: Job, revisionCount: number): JobSummary {
   };
 }
 
-export async function listJobs(actor: Actor, filters: { status?: JobStatus[]; technicianId?: number }): Promise<JobSummary[]> {
-  const where: WhereOptions<Job> = {};
-  if (actor.role === 'technician') where.technicianId = actor.id;
-  else if (filters.technicianId) where.technicianId = filters.technicianId;
-  if (filters.status?.length) where.status = { [Op.in]: filters.status };
+const JOB_COUNT_CAP = 10_000;
 
-  const jobs = await Job.findAll({
-    where,
-    include: [{ model: User, as: 'technician', attributes: ['id', 'name'] }],
-    order: [['dueAt', 'DESC']],
-    limit: 500,
-  });
-  const counts = await revisionCounts(jobs.map((j) => j.id));
-  return jobs.map((job) => toSummary(job, counts.get(job.id) ?? 0));
+// Each sort's columns, and the index that serves it over every job.
+const JOB_ORDERS: Record<JobSort, { columns: string[]; index: string }> = {
+  due: { columns: ['due_at', 'id'], index: 'jobs_list_due' },
+  claim: { columns: ['claim_reference'], index: 'claim_reference' },
+  technician: { columns: ['technician_name', 'due_at', 'id'], index: 'jobs_list_technician_name' },
+  visit: { columns: ['site_visit_date', 'id'], index: 'jobs_list_visit' },
+};
+
+function jobIndexFor(sort: JobSort, query: JobListQuery, technicianId: number | undefined) {
+  if (query.q) return undefined;
+  const statuses = query.status?.length ?? 0;
+  if (!technicianId && !statuses) return JOB_ORDERS[sort].index;
+  if (sort !== 'due' || statuses > 1) return undefined;
+  if (technicianId) return statuses ? 'jobs_technician_id_status_due_at' : 'jobs_list_by_technician';
+  return 'jobs_status_due_at';
+}
+
+// One page of jobs, in SQL: a technician sees only their own.
+export function jobListPageQuery(actor: Actor, query: JobListQuery): JobPageQuery {
+  const conditions: string[] = [];
+  const params: Record<string, unknown> = {};
+  const technicianId = actor.role === 'technician' ? actor.id : query.technicianId;
+  if (technicianId) {
+    conditions.push('j.technician_id = :technicianId');
+    params.technicianId = technicianId;
+  }
+  if (query.status?.length) {
+    conditions.push('j.status IN (:statuses)');
+    params.statuses = query.status;
+  }
+  const sort = query.sort ?? 'due';
+  const direction = (query.dir ?? JOB_SORT_DEFAULT_DIR[sort]) === 'desc' ? 'DESC' : 'ASC';
+  const page = query.page ?? 1;
+  const pageSize = query.pageSize ?? 50;
+  return {
+    conditions,
+    params,
+    search: query.q,
+    orderBy: JOB_ORDERS[sort].columns.map((c) => `j.${c} ${direction}`),
+    limit: pageSize,
+    offset: (page - 1) * pageSize,
+    index: jobIndexFor(sort, query, technicianId),
+  };
+}
+
+export async function listJobs(actor: Actor, query: JobListQuery): Promise<JobPage> {
+  const pageQuery = jobListPageQuery(actor, query);
+  const [ids, counted] = await Promise.all([pageOfJobIds(pageQuery), countJobs(pageQuery, JOB_COUNT_CAP + 1)]);
+  const jobs = ids.length
+    ? await Job.findAll({ where: { id: ids }, include: [{ model: User, as: 'technician', attributes: ['id', 'name'] }] })
+    : [];
+  const counts = await revisionCounts(ids);
+  const summaries = inIdOrder(ids, jobs).map((job) => toSummary(job, counts.get(job.id) ?? 0));
+  const total = Math.min(counted, JOB_COUNT_CAP);
+  return { jobs: summaries, total, totalIsAtLeast: counted > JOB_COUNT_CAP, page: query.page ?? 1, pageSize: pageQuery.limit };
 }
 
 async function revisionCounts(jobIds: number[]) {

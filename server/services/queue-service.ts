@@ -1,14 +1,13 @@
-import { literal, Op, type Order, type WhereOptions } from 'sequelize';
+import { QueryTypes } from 'sequelize';
 
 import type { JobStatus } from '../../shared/jobs';
-import type { QueueFilters, QueuePage, QueueRow, QueueSort } from '../../shared/review';
-import { Job, User } from '../models';
+import { QUEUE_STATUSES, type QueueFilters, type QueuePage, type QueueRow, type QueueSort } from '../../shared/review';
+import { Job, sequelize, User } from '../models';
+import { countJobs, inIdOrder, type JobPageQuery, pageOfJobIds } from './job-page-query';
 
 type Actor = Express.User;
 
 const DEFAULT_STATUSES: JobStatus[] = ['submitted', 'in_review', 'resubmitted'];
-const priorityRank = (direction: 'ASC' | 'DESC') => literal(`FIELD(\`Job\`.\`priority\`, 'catastrophe', 'urgent', 'normal') ${direction}`);
-const OVERDUE_FIRST = literal('(`Job`.`effective_due_at` < UTC_TIMESTAMP(3)) DESC');
 
 export function activeClaim(job: Pick<Job, 'claimedById' | 'claimExpiresAt'>, now = new Date()) {
   return job.claimedById !== null && job.claimExpiresAt !== null && job.claimExpiresAt > now;
@@ -34,82 +33,123 @@ export function toQueueRow(job: Job, now = new Date()): QueueRow {
   };
 }
 
-function orderFor(sort: QueueSort | undefined, dir: 'asc' | 'desc'): Order {
-  const direction = dir.toUpperCase();
-  switch (sort) {
-    case 'submitted':
-      return [
-        ['submittedAt', direction],
-        ['id', 'ASC'],
-      ];
-    case 'claim':
-      return [['claimReference', direction]];
-    case 'technician':
-      return [
-        [{ model: User, as: 'technician' }, 'name', direction],
-        ['effectiveDueAt', 'ASC'],
-      ];
-    case 'priority':
-      return [priorityRank(direction === 'ASC' ? 'ASC' : 'DESC'), ['effectiveDueAt', 'ASC']];
-    case 'revision':
-      return [
-        ['currentRevision', direction],
-        ['effectiveDueAt', 'ASC'],
-      ];
-    case 'due':
-      return [
-        ['effectiveDueAt', direction],
-        ['id', 'ASC'],
-      ];
-    default:
-      // Overdue first, then by due time, then the most urgent priority.
-      return [OVERDUE_FIRST, ['effectiveDueAt', 'ASC'], priorityRank('ASC'), ['id', 'ASC']];
+// Each sort's columns, and the index that serves it over the whole queue.
+const QUEUE_ORDERS: Record<QueueSort, { columns: string[]; index: string }> = {
+  due: { columns: ['effective_due_at', 'priority_rank', 'id'], index: 'jobs_queue_due' },
+  submitted: { columns: ['submitted_at', 'id'], index: 'jobs_queue_submitted' },
+  claim: { columns: ['claim_reference'], index: 'jobs_queue_claim' },
+  technician: { columns: ['technician_name', 'effective_due_at', 'id'], index: 'jobs_queue_technician_name' },
+  priority: { columns: ['priority_rank', 'effective_due_at', 'id'], index: 'jobs_queue_priority' },
+  revision: { columns: ['current_revision', 'effective_due_at', 'id'], index: 'jobs_queue_revision' },
+};
+
+// Every column of an order runs the same way, so one index serves it, read forwards or
+// backwards. The default is by due time (overdue records come first by that alone), then
+// the most urgent priority.
+function orderFor(sort: QueueSort | undefined, dir: 'asc' | 'desc') {
+  const direction = dir === 'desc' ? 'DESC' : 'ASC';
+  return QUEUE_ORDERS[sort ?? 'due'].columns.map((column) => `j.${column} ${direction}`);
+}
+
+function conditionsFor(actor: Actor, filters: QueueFilters) {
+  const conditions: string[] = [];
+  const params: Record<string, unknown> = {};
+  const statuses = filters.status?.length ? filters.status : DEFAULT_STATUSES;
+  const isDefault = statuses.length === DEFAULT_STATUSES.length && DEFAULT_STATUSES.every((s) => statuses.includes(s));
+  if (isDefault) conditions.push('j.queue_open = 1');
+  else {
+    conditions.push('j.status IN (:statuses)');
+    params.statuses = statuses;
   }
+  const equal = (column: string, key: string, value: unknown) => {
+    if (value === undefined) return;
+    conditions.push(`j.${column} = :${key}`);
+    params[key] = value;
+  };
+  equal('technician_id', 'technicianId', filters.technicianId);
+  equal('loss_type', 'lossType', filters.lossType);
+  equal('priority', 'priority', filters.priority);
+  equal('camera_class', 'cameraClass', filters.cameraClass);
+  if (filters.submission === 'first') conditions.push('j.current_revision = 1');
+  if (filters.submission === 'resubmission') conditions.push('j.current_revision > 1');
+  if (filters.claimedByMe) {
+    conditions.push('j.claimed_by_id = :me AND j.claim_expires_at > UTC_TIMESTAMP(3)');
+    params.me = actor.id;
+  }
+  return { conditions, params, isDefault: isDefault && conditions.length === 1 };
+}
+
+// The index for a filter and sort: the queue's own for the whole queue, the technician's or
+// the state's by due time; other combinations are small enough for the planner to choose.
+function indexFor(filters: QueueFilters, sort: QueueSort, wholeQueue: boolean, search?: string) {
+  if (search) return undefined;
+  if (wholeQueue) return QUEUE_ORDERS[sort].index;
+  const others = [filters.lossType, filters.priority, filters.cameraClass, filters.submission, filters.claimedByMe || undefined];
+  if (sort !== 'due' || others.some((v) => v !== undefined)) return undefined;
+  if (filters.technicianId && !filters.status?.length) return 'jobs_queue_by_technician';
+  if (!filters.technicianId && filters.status?.length === 1) return 'jobs_status_due_order';
+  return undefined;
+}
+
+type QueueParamsIn = { page: number; pageSize: number; sort?: QueueSort; dir: 'asc' | 'desc'; filters: QueueFilters; search?: string };
+
+export function queuePageQuery(actor: Actor, params: QueueParamsIn) {
+  const { conditions, params: values, isDefault } = conditionsFor(actor, params.filters);
+  const sort = params.sort ?? 'due';
+  const page: JobPageQuery = {
+    conditions,
+    params: values,
+    search: params.search,
+    orderBy: orderFor(sort, params.dir),
+    limit: params.pageSize,
+    offset: (params.page - 1) * params.pageSize,
+    index: indexFor(params.filters, sort, isDefault, params.search),
+  };
+  return { page, wholeQueue: isDefault && !params.search };
+}
+
+// Counts per state for the whole queue, ignoring the filters: read from the status index.
+async function stateCounts() {
+  const rows = await sequelize.query<{ status: JobStatus; n: number }>(
+    `SELECT status, COUNT(*) AS n FROM jobs WHERE status IN (:states) GROUP BY status`,
+    { replacements: { states: QUEUE_STATUSES }, type: QueryTypes.SELECT },
+  );
+  return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<JobStatus, number>>;
 }
 
 export async function listQueue(
   actor: Actor,
-  params: { page: number; pageSize: number; sort?: QueueSort; dir: 'asc' | 'desc'; filters: QueueFilters },
+  params: { page: number; pageSize: number; sort?: QueueSort; dir: 'asc' | 'desc'; filters: QueueFilters; search?: string },
 ): Promise<QueuePage> {
-  const { filters } = params;
-  const statuses = filters.status?.length ? filters.status : DEFAULT_STATUSES;
-  const where: WhereOptions<Job> = { status: { [Op.in]: statuses } };
-  if (filters.technicianId) where.technicianId = filters.technicianId;
-  if (filters.lossType) where.lossType = filters.lossType;
-  if (filters.priority) where.priority = filters.priority;
-  if (filters.cameraClass) where.cameraClass = filters.cameraClass;
-  if (filters.submission === 'first') where.currentRevision = 1;
-  if (filters.submission === 'resubmission') where.currentRevision = { [Op.gt]: 1 };
-  if (filters.claimedByMe) {
-    where.claimedById = actor.id;
-    where.claimExpiresAt = { [Op.gt]: new Date() };
-  }
-
-  const { rows, count } = await Job.findAndCountAll({
-    where,
-    include: [
-      { model: User, as: 'technician', attributes: ['id', 'name'] },
-      { model: User, as: 'claimedBy', attributes: ['id', 'name'], required: false },
-    ],
-    order: orderFor(params.sort, params.dir),
-    limit: params.pageSize,
-    offset: (params.page - 1) * params.pageSize,
-  });
-
-  // Counts per state for the whole queue, ignoring the status filter.
-  const countRows = (await Job.findAll({
-    attributes: ['status', [literal('COUNT(*)'), 'n']],
-    where: { status: { [Op.in]: ['submitted', 'in_review', 'resubmitted', 'rework_requested'] } },
-    group: ['status'],
-    raw: true,
-  })) as unknown as { status: JobStatus; n: number }[];
+  const { conditions, params: values, isDefault } = conditionsFor(actor, params.filters);
+  const query = { conditions, params: values, search: params.search };
+  const [ids, counts] = await Promise.all([
+    pageOfJobIds({
+      ...query,
+      orderBy: orderFor(params.sort, params.dir),
+      limit: params.pageSize,
+      offset: (params.page - 1) * params.pageSize,
+    }),
+    stateCounts(),
+  ]);
+  // The unfiltered queue's size is the sum of its states' counts: no second count needed.
+  const total = isDefault && !params.search ? DEFAULT_STATUSES.reduce((sum, s) => sum + (counts[s] ?? 0), 0) : await countJobs(query);
+  const jobs = ids.length
+    ? await Job.findAll({
+        where: { id: ids },
+        include: [
+          { model: User, as: 'technician', attributes: ['id', 'name'] },
+          { model: User, as: 'claimedBy', attributes: ['id', 'name'], required: false },
+        ],
+      })
+    : [];
 
   const now = new Date();
   return {
-    rows: rows.map((job) => toQueueRow(job, now)),
-    total: count,
+    rows: inIdOrder(ids, jobs).map((job) => toQueueRow(job, now)),
+    total,
     page: params.page,
     pageSize: params.pageSize,
-    counts: Object.fromEntries(countRows.map((r) => [r.status, Number(r.n)])),
+    counts,
   };
 }

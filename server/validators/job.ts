@@ -1,6 +1,7 @@
-import { body } from 'express-validator';
+import { body, query } from 'express-validator';
 
-import { LOSS_TYPES, PRIORITIES, PROPERTY_TYPES } from '../../shared/jobs';
+import { JOB_SORTS, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES } from '../../shared/jobs';
+import { SEARCH_MAX_LENGTH } from '../../shared/search';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 const today = () => new Date().toISOString().slice(0, 10);
@@ -46,4 +47,14 @@ export const jobUpdateRules = [
   body()
     .custom((v) => v && ['technicianId', 'dueAt', 'priority', 'siteVisitDate'].some((k) => v[k] !== undefined))
     .withMessage('Send at least one of technicianId, dueAt, priority, siteVisitDate'),
+];
+
+export const jobListRules = [
+  query('q', `Search text of at most ${SEARCH_MAX_LENGTH} characters`).optional().isString().isLength({ max: SEARCH_MAX_LENGTH }),
+  query('sort', `Choose one of: ${JOB_SORTS.join(', ')}`)
+    .optional()
+    .isIn(JOB_SORTS),
+  query('dir', 'asc or desc').optional().isIn(['asc', 'desc']),
+  query('page', 'A page number from 1').optional().isInt({ min: 1, max: 10_000 }).toInt(),
+  query('pageSize', 'From 5 to 100 rows').optional().isInt({ min: 5, max: 100 }).toInt(),
 ];

@@ -5,6 +5,7 @@ import { LOSS_TYPES, PRIORITIES } from '../../shared/jobs';
 import { DECISIONS, QUEUE_SORTS, QUEUE_STATUSES } from '../../shared/review';
 import { rubricProblems } from '../../shared/review-rules';
 import { APPLIES_WHEN, type Criterion } from '../../shared/rubric';
+import { SEARCH_MAX_LENGTH } from '../../shared/search';
 
 const oneOf = (values: readonly string[]) => `Choose one of: ${values.join(', ')}`;
 
@@ -23,6 +24,7 @@ export const queueQueryRules = [
   query('cameraClass', oneOf(CAMERA_CLASSES)).optional().isIn(CAMERA_CLASSES),
   query('submission', 'first or resubmission').optional().isIn(['first', 'resubmission']),
   query('claimedByMe', 'true or false').optional().isBoolean(),
+  query('q', `Search text of at most ${SEARCH_MAX_LENGTH} characters`).optional().isString().isLength({ max: SEARCH_MAX_LENGTH }),
 ];
 
 export const reviewRules = [

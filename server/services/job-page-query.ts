@@ -1,0 +1,67 @@
+// One page of job ids in SQL, for the queue and the job list. Every offered order has an
+// index whose leading columns are the filter (see the queue-and-job-list index migration),
+// so a page reads its own rows plus the offset from the index and the rows are then fetched
+// by primary key: no filesort over the queue, no table scan for the count.
+import { QueryTypes } from 'sequelize';
+
+import { fullTextQuery, likePrefix, searchTerms } from '../../shared/search';
+import { sequelize } from '../db';
+
+export type JobPageQuery = {
+  conditions: string[];
+  params: Record<string, unknown>;
+  orderBy: string[]; // columns of jobs j, each with its direction
+  limit: number;
+  offset: number;
+  search?: string;
+  // The index that serves this filter and order, named so the plan never depends on table
+  // statistics (on a small or freshly loaded table MariaDB may otherwise choose a filesort).
+  index?: string;
+};
+
+// Ids of the jobs a search matches: the claim reference from its start, or every word of
+// the address and the technician's name from its start (full-text index).
+function searchSource(search: string | undefined, params: Record<string, unknown>) {
+  const terms = search ? searchTerms(search) : null;
+  if (!terms) return null;
+  params.searchPrefix = likePrefix(terms.referencePrefix);
+  const fullText = fullTextQuery(terms);
+  if (!fullText) return 'SELECT id FROM jobs WHERE claim_reference LIKE :searchPrefix';
+  params.searchWords = fullText;
+  return `SELECT id FROM jobs WHERE claim_reference LIKE :searchPrefix
+    UNION SELECT id FROM jobs WHERE MATCH(street, city, postcode, technician_name) AGAINST (:searchWords IN BOOLEAN MODE)`;
+}
+
+function fromAndWhere(q: Omit<JobPageQuery, 'orderBy' | 'limit' | 'offset'>, params: Record<string, unknown>) {
+  const matches = searchSource(q.search, params);
+  const from = matches ? `(${matches}) s JOIN jobs j ON j.id = s.id` : `jobs j${q.index ? ` FORCE INDEX (${q.index})` : ''}`;
+  const where = q.conditions.length ? `WHERE ${q.conditions.join(' AND ')}` : '';
+  return `FROM ${from} ${where}`;
+}
+
+export function pageSql(q: JobPageQuery) {
+  const params = { ...q.params, limit: q.limit, offset: q.offset };
+  return { sql: `SELECT j.id ${fromAndWhere(q, params)} ORDER BY ${q.orderBy.join(', ')} LIMIT :limit OFFSET :offset`, params };
+}
+
+export async function pageOfJobIds(q: JobPageQuery): Promise<number[]> {
+  const { sql, params } = pageSql(q);
+  const rows = await sequelize.query<{ id: number }>(sql, { replacements: params, type: QueryTypes.SELECT });
+  return rows.map((r) => Number(r.id));
+}
+
+// How many jobs match, counted from an index. With a cap, counting stops there: a list of
+// every job a firm ever had needs "more than 10,000", not an exact figure at each page.
+export async function countJobs(q: Pick<JobPageQuery, 'conditions' | 'params' | 'search'>, cap?: number): Promise<number> {
+  const params: Record<string, unknown> = { ...q.params, cap };
+  const from = fromAndWhere({ conditions: q.conditions, params: q.params, search: q.search }, params);
+  const sql = cap ? `SELECT COUNT(*) AS n FROM (SELECT 1 ${from} LIMIT :cap) capped` : `SELECT COUNT(*) AS n ${from}`;
+  const [row] = await sequelize.query<{ n: number }>(sql, { replacements: params, type: QueryTypes.SELECT });
+  return Number(row.n);
+}
+
+// Rows fetched by id come back in any order: put them in the page's order.
+export function inIdOrder<T extends { id: number }>(ids: number[], rows: T[]): T[] {
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  return ids.map((id) => byId.get(id)).filter((r): r is T => r !== undefined);
+}
