@@ -1,36 +1,18 @@
 import fs from 'node:fs';
 import path from 'node:path';
 
-import connectSessionSequelize from 'connect-session-sequelize';
 import express from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
 
 import { passport } from './auth/passport';
+import { createSessionStore } from './auth/session-store';
 import { config } from './config';
 import { requireSameOrigin } from './middleware/csrf';
 import { errorHandler, notFoundHandler } from './middleware/error-handler';
 import { limitJsonDepth } from './middleware/json-depth';
 import { endStaleSessions } from './middleware/session-lifetime';
-import { sequelize } from './models';
 import { apiRouters } from './routes';
-
-const SequelizeStore = connectSessionSequelize(session.Store);
-
-export function createSessionStore() {
-  return new SequelizeStore({
-    db: sequelize,
-    table: 'Session',
-    // Expired rows are removed by whichever instance runs next; harmless when several do.
-    checkExpirationInterval: config.isTest ? 0 : 15 * 60_000,
-    expiration: config.sessionMaxAgeHours * 3_600_000,
-    extendDefaultFields: (defaults: { data: string; expires: Date }, sess: { passport?: { user?: number } }) => ({
-      data: defaults.data,
-      expires: defaults.expires,
-      userId: sess.passport?.user ?? null,
-    }),
-  });
-}
 
 // Hashed bundle files never change under their name; the page and the worker are revalidated.
 function cacheControlFor(webDir: string, file: string) {
