@@ -1,8 +1,10 @@
 import fs from 'node:fs';
+import type { ServerResponse } from 'node:http';
 import path from 'node:path';
 
 import express from 'express';
 import session from 'express-session';
+import expressStaticGzip from 'express-static-gzip';
 import helmet from 'helmet';
 
 import { passport } from './auth/passport';
@@ -68,8 +70,16 @@ export function createApp(options: { webDir?: string } = {}) {
 
   const webDir = options.webDir ?? path.resolve(__dirname, '..', 'dist');
   if (fs.existsSync(path.join(webDir, 'index.html'))) {
+    // Pre-compressed copies (scripts/compress-web.js) go to browsers that accept them.
+    // The list of .br/.gz files is read once here: restart after a rebuild.
+    const setHeaders = (res: ServerResponse, file: string) => res.setHeader('Cache-Control', cacheControlFor(webDir, file));
     app.use(
-      express.static(webDir, { index: false, setHeaders: (res, file) => res.setHeader('Cache-Control', cacheControlFor(webDir, file)) }),
+      expressStaticGzip(webDir, {
+        index: false,
+        enableBrotli: true,
+        orderPreference: ['br', 'gzip'],
+        serveStatic: { index: false, setHeaders },
+      }),
     );
     // A missing bundle chunk or worker must be a 404, never index.html: a stale page would
     // otherwise load HTML as script and the service worker would fail to register.

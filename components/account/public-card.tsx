@@ -1,10 +1,12 @@
 // The frame of the public pages (sign-in's siblings): one card in the middle of the page.
 import { ScrollView, StyleSheet, View } from 'react-native';
 
+import { useDeferredFonts } from '@/components/ui/deferred-fonts';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 
 export function PublicCard({ title, children }: { title: string; children: React.ReactNode }) {
+  useDeferredFonts();
   return (
     <ScrollView contentContainerStyle={styles.page}>
       <View style={styles.card} role="main">

@@ -3,8 +3,8 @@ import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { ApiError } from '@/components/lib/api-client';
+import { lazyView } from '@/components/lib/lazy-view';
 import { saveRecordDraft, useRecordSubmitMutation } from '@/components/queries/capture-record';
-import { StationSection } from '@/components/stations/station-section';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
@@ -29,6 +29,8 @@ import { SaveStatus } from './save-status';
 import { toFormFields } from './server-fields';
 import { StationsSection } from './stations-section';
 import { type DraftVersion, useRecordSync } from './use-record-sync';
+
+const StationSection = lazyView(() => import('@/components/stations/station-section').then((m) => m.StationSection), 'the station plan');
 
 const recordOf = (values: FormValues) => toRecord(values).record;
 

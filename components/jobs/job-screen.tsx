@@ -5,11 +5,11 @@ import { CaptureRecordForm } from '@/components/capture-record/capture-record-fo
 import { FilesSection } from '@/components/capture-record/files-section';
 import { FindingsPanel } from '@/components/capture-record/findings-panel';
 import { formatDate, formatDateTime } from '@/components/lib/format';
+import { lazyView } from '@/components/lib/lazy-view';
 import { useJobQuery, useRevisionQuery } from '@/components/queries/jobs';
 import { useSessionQuery } from '@/components/queries/session';
 import { ReworkChecklist } from '@/components/rework/rework-checklist';
 import { Timeline } from '@/components/rework/timeline';
-import { StationSection } from '@/components/stations/station-section';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
@@ -20,6 +20,8 @@ import { AssignmentPanel } from './assignment-panel';
 import { DueText } from './due-text';
 import { RecordView } from './record-view';
 import { StatusBadge } from './status-badge';
+
+const StationSection = lazyView(() => import('@/components/stations/station-section').then((m) => m.StationSection), 'the station plan');
 
 export function JobScreen({ id }: { id: number }) {
   const { data: user } = useSessionQuery();

@@ -2,8 +2,8 @@
 import { useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
+import { lazyView } from '@/components/lib/lazy-view';
 import { useSessionQuery } from '@/components/queries/session';
-import { StationPlot } from '@/components/stations/station-plot';
 import { HelpOverlay } from '@/components/ui/help-overlay';
 import { Notice } from '@/components/ui/notice';
 import { Section } from '@/components/ui/section';
@@ -16,6 +16,8 @@ import { RevisionPanel } from './revision-panel';
 import { RubricColumn } from './rubric-column';
 import { useScoreSheet } from './use-score-sheet';
 import { SCORING_KEYS, useScoringKeys } from './use-scoring-keys';
+
+const StationPlot = lazyView(() => import('@/components/stations/station-plot').then((m) => m.StationPlot), 'the station plan');
 
 export function ScoringScreen({ workspace }: { workspace: Workspace }) {
   const { data: me } = useSessionQuery();

@@ -1,5 +1,6 @@
 import { Link, useRouter } from 'expo-router';
 
+import { lazyView } from '@/components/lib/lazy-view';
 import { useSessionQuery } from '@/components/queries/session';
 import { periodSearch, useTechnicianTrendsQuery } from '@/components/queries/trends';
 import { Notice } from '@/components/ui/notice';
@@ -8,8 +9,9 @@ import { Text } from '@/components/ui/text';
 import { colors } from '@/components/ui/theme';
 
 import { PeriodPicker } from './period-picker';
-import { TechnicianTrendsView } from './technician-trends-view';
 import { usePeriodParams } from './trends-screen';
+
+const TechnicianTrendsView = lazyView(() => import('./technician-trends-view').then((m) => m.TechnicianTrendsView), 'the charts');
 
 // One technician's trends: a manager opens anyone's; a technician sees only their own.
 export function TechnicianTrendsPage({ technicianId }: { technicianId: number | null }) {

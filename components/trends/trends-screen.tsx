@@ -1,6 +1,7 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { View } from 'react-native';
 
+import { lazyView } from '@/components/lib/lazy-view';
 import {
   periodSearch,
   useCalibrationQuery,
@@ -18,7 +19,8 @@ import { DownloadLink } from './download-link';
 import { periodFor, PeriodPicker } from './period-picker';
 import { CalibrationView, ReviewerTable } from './reviewers-and-calibration';
 import { TeamTable } from './team-table';
-import { TechnicianTrendsView } from './technician-trends-view';
+
+const TechnicianTrendsView = lazyView(() => import('./technician-trends-view').then((m) => m.TechnicianTrendsView), 'the charts');
 
 export function usePeriodParams() {
   const params = useLocalSearchParams<{ weeks?: string; rubricVersion?: string }>();

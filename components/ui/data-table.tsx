@@ -1,184 +1,20 @@
-// A sortable table built on @tanstack/react-table (v9), rendered with react-native views so
-// it works on phone and desktop. On narrow screens it scrolls sideways.
-import {
-  type ColumnDef,
-  createSortedRowModel,
-  flexRender,
-  type RowData,
-  rowSortingFeature,
-  sortFns,
-  type SortingState,
-  tableFeatures,
-  useTable,
-} from '@tanstack/react-table';
-import { useEffect, useMemo, useRef, useState } from 'react';
-import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+// The table is loaded on first use: @tanstack/react-table is the largest library in the app,
+// and the sign-in screen and the technician's phone screens never need it.
+import type { RowData } from '@tanstack/react-table';
+import { type ComponentType, lazy, Suspense } from 'react';
 
-import { chooseOnKeys } from '@/components/lib/press-keys';
-
+import type { DataTableProps } from './data-table-view';
 import { Text } from './text';
-import { colors, fonts, space } from './theme';
 
-export const dataTableFeatures = tableFeatures({
-  rowSortingFeature,
-  sortedRowModel: createSortedRowModel(),
-  sortFns,
-});
+export type { DataTableColumn, DataTableProps } from './data-table-view';
 
-export type DataTableColumn<T extends RowData> = ColumnDef<typeof dataTableFeatures, T> & { meta?: { width?: number } };
+const DataTableView = lazy(() => import('./data-table-view'));
 
-type Props<T extends RowData> = {
-  label: string;
-  columns: DataTableColumn<T>[];
-  data: T[];
-  emptyText: string;
-  initialSorting?: SortingState;
-  getRowId?: (row: T) => string;
-  onRowPress?: (row: T) => void;
-  // Keyboard focus on a row makes it the selected one, so shortcuts act on what has focus.
-  onRowFocus?: (row: T) => void;
-  // Server-side sorting: the parent owns the sort state and fetches rows in that order.
-  sorting?: SortingState;
-  onSortingChange?: (sorting: SortingState) => void;
-  selectedRowId?: string | null;
-};
-
-const SORT_WORD = { asc: 'ascending', desc: 'descending' } as const;
-
-export function DataTable<T extends RowData>({
-  label,
-  columns,
-  data,
-  emptyText,
-  initialSorting = [],
-  getRowId,
-  onRowPress,
-  onRowFocus,
-  sorting: controlled,
-  onSortingChange,
-  selectedRowId,
-}: Props<T>) {
-  const [localSorting, setLocalSorting] = useState<SortingState>(initialSorting);
-  const sorting = controlled ?? localSorting;
-  const setSorting = (updater: SortingState | ((old: SortingState) => SortingState)) => {
-    const next = typeof updater === 'function' ? updater(sorting) : updater;
-    if (onSortingChange) onSortingChange(next);
-    else setLocalSorting(next);
-  };
-  const withTextCells = useMemo(
-    () =>
-      columns.map((column) =>
-        column.cell ? column : { ...column, cell: (info: { getValue: () => unknown }) => plainCell(info.getValue()) },
-      ),
-    [columns],
-  );
-  const table = useTable({
-    features: dataTableFeatures,
-    columns: withTextCells as DataTableColumn<T>[],
-    data,
-    state: { sorting },
-    onSortingChange: setSorting,
-    manualSorting: Boolean(onSortingChange),
-    getRowId: getRowId ? (row: T) => getRowId(row) : undefined,
-  });
-
-  // When j/k move the selection while the keyboard is in the table, focus follows it.
-  const tableRef = useRef<View>(null);
-  useEffect(() => {
-    const node = tableRef.current as unknown as HTMLElement | null;
-    if (!selectedRowId || !node?.querySelector || !node.contains(document.activeElement)) return;
-    node.querySelector<HTMLElement>('[role="row"][aria-selected="true"]')?.focus();
-  }, [selectedRowId]);
-
-  const width = (meta: unknown) => (meta as { width?: number } | undefined)?.width ?? 160;
-
+export function DataTable<T extends RowData>(props: DataTableProps<T>) {
+  const View = DataTableView as unknown as ComponentType<DataTableProps<T>>;
   return (
-    <ScrollView horizontal contentContainerStyle={{ flexGrow: 1 }}>
-      <View ref={tableRef} role="table" aria-label={label} style={styles.table}>
-        {table.getHeaderGroups().map((group) => (
-          <View role="row" key={group.id} style={[styles.row, styles.headerRow]}>
-            {group.headers.map((header) => {
-              const sorted = header.column.getIsSorted();
-              const title = flexRender(header.column.columnDef.header, header.getContext());
-              const canSort = header.column.getCanSort();
-              return (
-                <View
-                  role="columnheader"
-                  key={header.id}
-                  style={[styles.cell, { width: width(header.column.columnDef.meta) }]}
-                  aria-sort={sorted ? SORT_WORD[sorted] : 'none'}
-                >
-                  {canSort ? (
-                    <Pressable
-                      role="button"
-                      accessibilityLabel={`Sort by ${String(header.column.columnDef.header)}`}
-                      onPress={header.column.getToggleSortingHandler()}
-                    >
-                      <Text style={styles.headerText}>
-                        {title}
-                        {sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}
-                      </Text>
-                    </Pressable>
-                  ) : (
-                    <Text style={styles.headerText}>{title}</Text>
-                  )}
-                </View>
-              );
-            })}
-          </View>
-        ))}
-        {table.getRowModel().rows.length === 0 ? (
-          <View role="row" style={styles.row}>
-            <View role="cell" style={styles.cell}>
-              <Text variant="muted">{emptyText}</Text>
-            </View>
-          </View>
-        ) : (
-          table.getRowModel().rows.map((row) => {
-            const cells = row.getAllCells().map((cell) => (
-              <View role="cell" key={cell.id} style={[styles.cell, { width: width(cell.column.columnDef.meta) }]}>
-                {renderCell(flexRender(cell.column.columnDef.cell, cell.getContext()))}
-              </View>
-            ));
-            const selected = selectedRowId === row.id;
-            return onRowPress ? (
-              <Pressable
-                role="row"
-                key={row.id}
-                aria-selected={selected}
-                onPress={() => onRowPress(row.original)}
-                onFocus={() => onRowFocus?.(row.original)}
-                {...chooseOnKeys(() => onRowPress(row.original))}
-                style={(state) => [styles.row, selected && styles.selected, (state as { focused?: boolean }).focused && styles.focused]}
-              >
-                {cells}
-              </Pressable>
-            ) : (
-              <View role="row" key={row.id} style={styles.row}>
-                {cells}
-              </View>
-            );
-          })
-        )}
-      </View>
-    </ScrollView>
+    <Suspense fallback={<Text variant="muted">{`Loading ${props.label.toLowerCase()}…`}</Text>}>
+      <View {...props} />
+    </Suspense>
   );
 }
-
-function plainCell(value: unknown) {
-  return <Text variant="small">{value === null || value === undefined ? '' : String(value)}</Text>;
-}
-
-function renderCell(content: React.ReactNode) {
-  return typeof content === 'string' || typeof content === 'number' ? plainCell(content) : content;
-}
-
-const styles = StyleSheet.create({
-  table: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, backgroundColor: colors.surface, minWidth: '100%' },
-  row: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: colors.line, minHeight: 44, alignItems: 'center' },
-  headerRow: { backgroundColor: colors.paper },
-  cell: { paddingHorizontal: space.md, paddingVertical: space.sm, flexGrow: 1 },
-  headerText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
-  selected: { backgroundColor: colors.selectedRow, borderLeftWidth: 4, borderLeftColor: colors.accent },
-  focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid' } as object,
-});

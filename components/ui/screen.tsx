@@ -1,5 +1,6 @@
 import { ScrollView, StyleSheet, View } from 'react-native';
 
+import { useDeferredFonts } from './deferred-fonts';
 import { Text } from './text';
 import { space } from './theme';
 
@@ -15,6 +16,7 @@ export function Screen({
   actions?: React.ReactNode;
   children: React.ReactNode;
 }) {
+  useDeferredFonts();
   return (
     <ScrollView contentContainerStyle={styles.content}>
       <View style={styles.header}>

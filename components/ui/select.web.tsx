@@ -3,7 +3,7 @@ import { View } from 'react-native';
 
 import type { SelectProps } from './select';
 import { Text } from './text';
-import { colors } from './theme';
+import { colors, fonts } from './theme';
 
 export type { SelectProps };
 
@@ -24,7 +24,7 @@ export function Select<T extends string>({ label, value, options, onChange, allL
             border: `1px solid ${colors.muted}`,
             padding: '0 8px',
             fontSize: 15,
-            fontFamily: 'PublicSans_400Regular',
+            fontFamily: fonts.regular,
             background: colors.surface,
             color: colors.ink,
           },

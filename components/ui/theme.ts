@@ -19,10 +19,13 @@ export const colors = {
   sidebarText: '#C9CED6',
 } as const;
 
+// Public Sans arrives just after the first screen (see app/_layout.tsx); until then, and if it
+// ever fails, the system's sans-serif face stands in.
+const withFallback = (face: string) => `${face}, system-ui, -apple-system, "Segoe UI", Roboto, sans-serif`;
 export const fonts = {
-  regular: 'PublicSans_400Regular',
-  semibold: 'PublicSans_600SemiBold',
-  bold: 'PublicSans_700Bold',
+  regular: withFallback('PublicSans_400Regular'),
+  semibold: withFallback('PublicSans_600SemiBold'),
+  bold: withFallback('PublicSans_700Bold'),
 } as const;
 
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
