@@ -32,22 +32,24 @@ function searchSource(search: string | undefined, params: Record<string, unknown
     UNION SELECT id FROM jobs WHERE MATCH(street, city, postcode, technician_name) AGAINST (:searchWords IN BOOLEAN MODE)`;
 }
 
-function fromAndWhere(q: Omit<JobPageQuery, 'orderBy' | 'limit' | 'offset'>, params: Record<string, unknown>) {
+function fromAndWhere(q: Omit<JobPageQuery, 'orderBy' | 'limit' | 'offset'>, params: Record<string, unknown>, joins = '') {
   const matches = searchSource(q.search, params);
   const from = matches ? `(${matches}) s JOIN jobs j ON j.id = s.id` : `jobs j${q.index ? ` FORCE INDEX (${q.index})` : ''}`;
   const where = q.conditions.length ? `WHERE ${q.conditions.join(' AND ')}` : '';
-  return `FROM ${from} ${where}`;
+  return `FROM ${from} ${joins} ${where}`;
 }
 
-export function pageSql(q: JobPageQuery) {
+// The page in one statement: the jobs' columns and whatever the joins add (the technician's
+// and the claimant's names), read along the named index. `select` names columns of j and
+// the joined tables; the default is the ids alone.
+export function pageSql(q: JobPageQuery, select = 'j.id', joins = '') {
   const params = { ...q.params, limit: q.limit, offset: q.offset };
-  return { sql: `SELECT j.id ${fromAndWhere(q, params)} ORDER BY ${q.orderBy.join(', ')} LIMIT :limit OFFSET :offset`, params };
+  return { sql: `SELECT ${select} ${fromAndWhere(q, params, joins)} ORDER BY ${q.orderBy.join(', ')} LIMIT :limit OFFSET :offset`, params };
 }
 
-export async function pageOfJobIds(q: JobPageQuery): Promise<number[]> {
-  const { sql, params } = pageSql(q);
-  const rows = await sequelize.query<{ id: number }>(sql, { replacements: params, type: QueryTypes.SELECT });
-  return rows.map((r) => Number(r.id));
+export async function pageOfJobs<T extends object>(q: JobPageQuery, select: string, joins: string): Promise<T[]> {
+  const { sql, params } = pageSql(q, select, joins);
+  return sequelize.query<T>(sql, { replacements: params, type: QueryTypes.SELECT });
 }
 
 // How many jobs match, counted from an index. With a cap, counting stops there: a list of
@@ -60,8 +62,5 @@ export async function countJobs(q: Pick<JobPageQuery, 'conditions' | 'params' | 
   return Number(row.n);
 }
 
-// Rows fetched by id come back in any order: put them in the page's order.
-export function inIdOrder<T extends { id: number }>(ids: number[], rows: T[]): T[] {
-  const byId = new Map(rows.map((r) => [r.id, r]));
-  return ids.map((id) => byId.get(id)).filter((r): r is T => r !== undefined);
-}
+// Values as the mariadb driver returns them, in the API's shapes.
+export const isoTime = (v: Date | string | null) => (v === null ? null : new Date(v).toISOString());

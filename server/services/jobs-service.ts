@@ -17,7 +17,7 @@ import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
-import { countJobs, inIdOrder, type JobPageQuery, pageOfJobIds } from './job-page-query';
+import { countJobs, isoTime, type JobPageQuery, pageOfJobs } from './job-page-query';
 
 type Actor = Express.User;
 
@@ -87,16 +87,54 @@ export function jobListPageQuery(actor: Actor, query: JobListQuery): JobPageQuer
   };
 }
 
+export const JOB_SELECT = `j.id, j.claim_reference, j.street, j.city, j.postcode, j.property_type, j.loss_type,
+  DATE_FORMAT(j.loss_date, '%Y-%m-%d') AS loss_date, DATE_FORMAT(j.site_visit_date, '%Y-%m-%d') AS site_visit_date,
+  j.due_at, j.priority, j.status, t.id AS technician_id, t.name AS technician_name,
+  (SELECT COUNT(*) FROM capture_revisions r WHERE r.job_id = j.id) AS revision_count`;
+export const JOB_JOINS = 'JOIN users t ON t.id = j.technician_id';
+type JobSqlRow = {
+  id: number;
+  claim_reference: string;
+  street: string;
+  city: string;
+  postcode: string;
+  property_type: JobSummary['propertyType'];
+  loss_type: JobSummary['lossType'];
+  loss_date: string;
+  site_visit_date: string | null;
+  due_at: Date;
+  priority: JobSummary['priority'];
+  status: JobSummary['status'];
+  technician_id: number;
+  technician_name: string;
+  revision_count: number | string;
+};
+
+const summaryFrom = (r: JobSqlRow): JobSummary => ({
+  id: Number(r.id),
+  claimReference: r.claim_reference,
+  street: r.street,
+  city: r.city,
+  postcode: r.postcode,
+  propertyType: r.property_type,
+  lossType: r.loss_type,
+  lossDate: r.loss_date,
+  siteVisitDate: r.site_visit_date,
+  dueAt: isoTime(r.due_at)!,
+  priority: r.priority,
+  status: r.status,
+  technician: { id: Number(r.technician_id), name: r.technician_name },
+  revisionCount: Number(r.revision_count),
+});
+
 export async function listJobs(actor: Actor, query: JobListQuery): Promise<JobPage> {
   const pageQuery = jobListPageQuery(actor, query);
-  const [ids, counted] = await Promise.all([pageOfJobIds(pageQuery), countJobs(pageQuery, JOB_COUNT_CAP + 1)]);
-  const jobs = ids.length
-    ? await Job.findAll({ where: { id: ids }, include: [{ model: User, as: 'technician', attributes: ['id', 'name'] }] })
-    : [];
-  const counts = await revisionCounts(ids);
-  const summaries = inIdOrder(ids, jobs).map((job) => toSummary(job, counts.get(job.id) ?? 0));
+  const [rows, counted] = await Promise.all([
+    pageOfJobs<JobSqlRow>(pageQuery, JOB_SELECT, JOB_JOINS),
+    countJobs(pageQuery, JOB_COUNT_CAP + 1),
+  ]);
   const total = Math.min(counted, JOB_COUNT_CAP);
-  return { jobs: summaries, total, totalIsAtLeast: counted > JOB_COUNT_CAP, page: query.page ?? 1, pageSize: pageQuery.limit };
+  return { jobs: rows.map(summaryFrom), total, totalIsAtLeast: counted > JOB_COUNT_CAP, page: query.page ?? 1, pageSize: pageQuery.limit };
 }
 
 async function revisionCounts(jobIds: number[]) {

@@ -2,8 +2,9 @@ import { QueryTypes } from 'sequelize';
 
 import type { JobStatus } from '../../shared/jobs';
 import { QUEUE_STATUSES, type QueueFilters, type QueuePage, type QueueRow, type QueueSort } from '../../shared/review';
-import { Job, sequelize, User } from '../models';
-import { countJobs, inIdOrder, type JobPageQuery, pageOfJobIds } from './job-page-query';
+import type { Job, User } from '../models';
+import { sequelize } from '../models';
+import { countJobs, isoTime, type JobPageQuery, pageOfJobs } from './job-page-query';
 
 type Actor = Express.User;
 
@@ -117,39 +118,55 @@ async function stateCounts() {
   return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<JobStatus, number>>;
 }
 
-export async function listQueue(
-  actor: Actor,
-  params: { page: number; pageSize: number; sort?: QueueSort; dir: 'asc' | 'desc'; filters: QueueFilters; search?: string },
-): Promise<QueuePage> {
-  const { conditions, params: values, isDefault } = conditionsFor(actor, params.filters);
-  const query = { conditions, params: values, search: params.search };
-  const [ids, counts] = await Promise.all([
-    pageOfJobIds({
-      ...query,
-      orderBy: orderFor(params.sort, params.dir),
-      limit: params.pageSize,
-      offset: (params.page - 1) * params.pageSize,
-    }),
-    stateCounts(),
-  ]);
-  // The unfiltered queue's size is the sum of its states' counts: no second count needed.
-  const total = isDefault && !params.search ? DEFAULT_STATUSES.reduce((sum, s) => sum + (counts[s] ?? 0), 0) : await countJobs(query);
-  const jobs = ids.length
-    ? await Job.findAll({
-        where: { id: ids },
-        include: [
-          { model: User, as: 'technician', attributes: ['id', 'name'] },
-          { model: User, as: 'claimedBy', attributes: ['id', 'name'], required: false },
-        ],
-      })
-    : [];
+// The queue page's columns and joins: everything a row shows, in the one statement.
+export const QUEUE_SELECT = `j.id, j.claim_reference, j.property_type, j.loss_type, j.camera_class, j.current_revision, j.submitted_at,
+  j.effective_due_at, j.priority, j.status, j.paused_ms, j.claimed_by_id, j.claim_expires_at,
+  t.id AS technician_id, t.name AS technician_name, c.name AS claimed_by_name`;
+export const QUEUE_JOINS = 'JOIN users t ON t.id = j.technician_id LEFT JOIN users c ON c.id = j.claimed_by_id';
+type QueueSqlRow = {
+  id: number;
+  claim_reference: string;
+  property_type: QueueRow['propertyType'];
+  loss_type: QueueRow['lossType'];
+  camera_class: QueueRow['cameraClass'];
+  current_revision: number;
+  submitted_at: Date | null;
+  effective_due_at: Date;
+  priority: QueueRow['priority'];
+  status: JobStatus;
+  paused_ms: number | string;
+  claimed_by_id: number | null;
+  claim_expires_at: Date | null;
+  technician_id: number;
+  technician_name: string;
+  claimed_by_name: string | null;
+};
 
-  const now = new Date();
+function queueRowFrom(r: QueueSqlRow, now: Date): QueueRow {
+  const claimed = r.claimed_by_id !== null && r.claim_expires_at !== null && new Date(r.claim_expires_at) > now;
   return {
-    rows: inIdOrder(ids, jobs).map((job) => toQueueRow(job, now)),
-    total,
-    page: params.page,
-    pageSize: params.pageSize,
-    counts,
+    id: Number(r.id),
+    claimReference: r.claim_reference,
+    technician: { id: Number(r.technician_id), name: r.technician_name },
+    propertyType: r.property_type,
+    lossType: r.loss_type,
+    cameraClass: r.camera_class,
+    revision: Number(r.current_revision),
+    submittedAt: isoTime(r.submitted_at),
+    dueAt: isoTime(r.effective_due_at)!,
+    priority: r.priority,
+    status: r.status,
+    claimedBy: claimed && r.claimed_by_name !== null ? { id: Number(r.claimed_by_id), name: r.claimed_by_name } : null,
+    waitingOn: r.status === 'rework_requested' ? 'technician' : 'reviewer',
+    pausedMs: Number(r.paused_ms),
   };
+}
+
+export async function listQueue(actor: Actor, params: QueueParamsIn): Promise<QueuePage> {
+  const { page, wholeQueue } = queuePageQuery(actor, params);
+  const [rows, counts] = await Promise.all([pageOfJobs<QueueSqlRow>(page, QUEUE_SELECT, QUEUE_JOINS), stateCounts()]);
+  // The unfiltered queue's size is the sum of its states' counts: no second count needed.
+  const total = wholeQueue ? DEFAULT_STATUSES.reduce((sum, s) => sum + (counts[s] ?? 0), 0) : await countJobs(page);
+  const now = new Date();
+  return { rows: rows.map((r) => queueRowFrom(r, now)), total, page: params.page, pageSize: params.pageSize, counts };
 }
