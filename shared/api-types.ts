@@ -1,5 +1,7 @@
 // Shapes the API sends and receives, shared so client and server cannot drift apart.
 import type { CaptureRecord } from './capture-record';
+import type { ClaimContacts } from './contacts';
+import type { DeliverySummary } from './delivery-summary';
 import type { StoredFile } from './files';
 import type { JobSummary } from './jobs';
 import type { CheckResult } from './pre-submit-checks';
@@ -18,6 +20,7 @@ export type UserRow = SessionUser & { active: boolean; createdAt: string };
 // GET /api/jobs/:id
 export type JobDetail = {
   job: JobSummary;
+  contacts: ClaimContacts;
   record: CaptureRecord;
   recordVersion: number;
   recordSavedAt: string | null;
@@ -59,3 +62,24 @@ export type FailedEmail = {
   lastError: string | null;
   createdAt: string;
 };
+
+// GET /api/jobs/:id/delivery (managers): the share links and the summary builds.
+export type ShareLinkView = {
+  id: number;
+  createdAt: string;
+  expiresAt: string;
+  revokedAt: string | null;
+  state: 'active' | 'expired' | 'revoked';
+};
+export type DeliveryView = {
+  id: number;
+  status: 'pending' | 'built' | 'failed';
+  notify: boolean;
+  createdAt: string;
+  builtAt: string | null;
+  lastError: string | null;
+};
+export type DeliveryState = { links: ShareLinkView[]; deliveries: DeliveryView[]; summaryFileId: number | null; accepted: boolean };
+
+// GET /api/share/:token: the acceptance summary, for anyone holding the link.
+export type SharedSummary = { summary: DeliverySummary; pdfAvailable: boolean };

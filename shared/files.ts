@@ -1,20 +1,24 @@
-export const FILE_KINDS = ['photo', 'sketch', 'station_coordinates'] as const;
+// 'summary' is the delivery PDF Sightline builds itself; technicians upload the other kinds.
+export const FILE_KINDS = ['photo', 'sketch', 'station_coordinates', 'summary'] as const;
+export const UPLOAD_KINDS = ['photo', 'sketch', 'station_coordinates'] as const;
 export type FileKind = (typeof FILE_KINDS)[number];
+export type UploadKind = (typeof UPLOAD_KINDS)[number];
 
 export const FILE_KIND_LABELS: Record<FileKind, string> = {
   photo: 'Photo',
   sketch: 'Floor sketch or station map',
   station_coordinates: 'Station coordinate file',
+  summary: 'Acceptance summary (PDF)',
 };
 
 // Content types accepted per kind, decided by the file's bytes, never its name.
-export const ACCEPTED_TYPES: Record<FileKind, string[]> = {
+export const ACCEPTED_TYPES: Record<UploadKind, string[]> = {
   photo: ['image/jpeg', 'image/png', 'image/webp'],
   sketch: ['image/png', 'application/pdf'],
   station_coordinates: ['text/csv'],
 };
 
-export const ACCEPTED_DESCRIPTION: Record<FileKind, string> = {
+export const ACCEPTED_DESCRIPTION: Record<UploadKind, string> = {
   photo: 'JPEG, PNG or WebP',
   sketch: 'PNG or PDF',
   station_coordinates: 'CSV text',
@@ -34,7 +38,12 @@ export type StoredFile = {
 export const DEFAULT_UPLOAD_MAX_MB = 25;
 export const DEFAULT_UPLOAD_MAX_BYTES = DEFAULT_UPLOAD_MAX_MB * 1024 * 1024;
 
-const KIND_PLURAL: Record<FileKind, string> = { photo: 'Photos', sketch: 'Floor sketches', station_coordinates: 'Station files' };
+const KIND_PLURAL: Record<FileKind, string> = {
+  photo: 'Photos',
+  sketch: 'Floor sketches',
+  station_coordinates: 'Station files',
+  summary: 'Summaries',
+};
 
 const megabytes = (bytes: number) => `${Math.round((bytes / 1024 / 1024) * 10) / 10} MB`;
 
@@ -45,7 +54,7 @@ export function fileTooLargeMessage(maxBytes: number, bytes?: number, kind?: Fil
 
 // Checked on the phone before anything is sent: a file that can never pass is not uploaded.
 // The content type the browser reports is only a first check; the server reads the bytes.
-export function uploadProblem(kind: FileKind, file: { size: number; type: string }, maxBytes = DEFAULT_UPLOAD_MAX_BYTES): string | null {
+export function uploadProblem(kind: UploadKind, file: { size: number; type: string }, maxBytes = DEFAULT_UPLOAD_MAX_BYTES): string | null {
   if (file.size === 0) return 'This file is empty.';
   if (file.size > maxBytes) return fileTooLargeMessage(maxBytes, file.size, kind);
   const csvLike = kind === 'station_coordinates' && (file.type === '' || /csv|text\/plain|excel/.test(file.type));

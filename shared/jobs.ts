@@ -1,3 +1,5 @@
+import { type ClaimContacts, CONTACT_FIELDS } from './contacts';
+
 // Job vocabulary shared by client, server, migrations and seeders.
 export const JOB_STATUSES = [
   'draft',
@@ -65,8 +67,8 @@ export type JobFields = {
   priority: Priority;
 };
 
-// What POST /api/jobs takes.
-export type JobInput = JobFields & { technicianId: number };
+// What POST /api/jobs takes: the job, who does it, and the claim's contacts.
+export type JobInput = JobFields & ClaimContacts & { technicianId: number };
 
 // The only fields a request may set on a new job; anything else in a body is ignored.
 export const JOB_INPUT_FIELDS = [
@@ -81,11 +83,25 @@ export const JOB_INPUT_FIELDS = [
   'dueAt',
   'priority',
   'technicianId',
+  ...CONTACT_FIELDS,
 ] as const satisfies readonly (keyof JobInput)[];
+
+// What PATCH /api/jobs/:id may change.
+export const UPDATABLE_JOB_FIELDS = ['technicianId', 'dueAt', 'priority', 'siteVisitDate', ...CONTACT_FIELDS] as const;
+
+// Contacts are optional: blank or absent is "not known" (null).
+export function pickContacts(body: Record<string, unknown>): ClaimContacts {
+  return Object.fromEntries(
+    CONTACT_FIELDS.map((field) => {
+      const value = body[field];
+      return [field, typeof value === 'string' && value.trim() ? value.trim() : null];
+    }),
+  ) as ClaimContacts;
+}
 
 export function pickJobInput(body: Record<string, unknown>): JobInput {
   const picked = Object.fromEntries(JOB_INPUT_FIELDS.map((field) => [field, body[field]]));
-  return { ...picked, siteVisitDate: picked.siteVisitDate ?? null } as JobInput;
+  return { ...picked, siteVisitDate: picked.siteVisitDate ?? null, ...pickContacts(body) } as JobInput;
 }
 
 export type JobSummary = JobFields & {

@@ -16,9 +16,9 @@ import {
   ACCEPTED_TYPES,
   DEFAULT_UPLOAD_MAX_MB,
   FILE_KIND_LABELS,
-  FILE_KINDS,
-  type FileKind,
   type StoredFile,
+  UPLOAD_KINDS,
+  type UploadKind,
 } from '@/shared/files';
 
 import { type UploadItem, useUploadQueue } from './use-upload-queue';
@@ -26,7 +26,7 @@ import { type UploadItem, useUploadQueue } from './use-upload-queue';
 type Props = { jobId: number; files: StoredFile[]; editable: boolean; userId?: number };
 
 export function FilesSection({ jobId, files, editable, userId }: Props) {
-  const [kind, setKind] = useState<FileKind>('photo');
+  const [kind, setKind] = useState<UploadKind>('photo');
   const queue = useUploadQueue(jobId, userId ?? 0);
   const detach = useFileDetachMutation(jobId);
 
@@ -60,9 +60,9 @@ export function FilesSection({ jobId, files, editable, userId }: Props) {
       ))}
       {editable ? (
         <>
-          <ChoiceField<FileKind>
+          <ChoiceField<UploadKind>
             label="Kind of file to add"
-            options={FILE_KINDS.map((k) => ({ value: k, label: FILE_KIND_LABELS[k] }))}
+            options={UPLOAD_KINDS.map((k) => ({ value: k, label: FILE_KIND_LABELS[k] }))}
             value={kind}
             onChange={setKind}
           />

@@ -8,9 +8,9 @@ import { deviceKey, deviceKeys, readDevice, removeDevice, writeDevice } from '@/
 import { useOnline } from '@/components/device/use-online';
 import { api, ApiError } from '@/components/lib/api-client';
 import { invalidateJob } from '@/components/queries/jobs';
-import { type FileKind, type StoredFile, uploadProblem } from '@/shared/files';
+import { type StoredFile, type UploadKind, uploadProblem } from '@/shared/files';
 
-type Queued = { id: string; jobId: number; kind: FileKind; name: string; blob: Blob; queuedAt: string };
+type Queued = { id: string; jobId: number; kind: UploadKind; name: string; blob: Blob; queuedAt: string };
 
 export type UploadItem = {
   id: string;
@@ -26,7 +26,7 @@ export type UploadItem = {
 const retryable = (error: unknown) =>
   !(error instanceof ApiError) || error.status === 0 || error.status === 408 || error.status === 429 || error.status >= 500;
 
-function sendFile(jobId: number, kind: FileKind, name: string, blob: Blob, onProgress: (fraction: number) => void) {
+function sendFile(jobId: number, kind: UploadKind, name: string, blob: Blob, onProgress: (fraction: number) => void) {
   const form = new FormData();
   form.append('kind', kind);
   form.append('file', blob, name);
@@ -83,7 +83,7 @@ export function useUploadQueue(jobId: number, userId: number) {
   }, [jobId, prefix, queryClient]);
 
   const add = useCallback(
-    async (kind: FileKind, name: string, blob: Blob) => {
+    async (kind: UploadKind, name: string, blob: Blob) => {
       const id = `${Date.now().toString(36)}-${Math.random().toString(36).slice(2, 8)}`;
       const problem = uploadProblem(kind, { size: blob.size, type: blob.type });
       if (problem) {

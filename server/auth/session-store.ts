@@ -5,6 +5,7 @@
 // TOUCH_EVERY_MS, which only shortens an idle session by that much.
 import connectSessionSequelize from 'connect-session-sequelize';
 import session from 'express-session';
+import { QueryTypes } from 'sequelize';
 
 import { config } from '../config';
 import { sequelize } from '../db';
@@ -16,6 +17,18 @@ type Data = session.SessionData & { touchedAt?: number; passport?: { user?: numb
 type Callback = (err?: unknown) => void;
 
 class ThrottledSessionStore extends SequelizeStore {
+  // Read on every request: one primary-key lookup of the data column, no model instance, and
+  // a row past its expiry is no session even before the clean-up removes it.
+  get = (sid: string, callback: (err: unknown, session?: Data | null) => void) => {
+    sequelize
+      .query<{ data: string | null }>('SELECT data FROM sessions WHERE sid = ? AND expires > UTC_TIMESTAMP()', {
+        replacements: [sid],
+        type: QueryTypes.SELECT,
+      })
+      .then(([row]) => callback(null, row?.data ? (JSON.parse(row.data) as Data) : null))
+      .catch((error) => callback(error));
+  };
+
   set = (sid: string, data: Data, callback?: Callback) => {
     data.touchedAt = Date.now();
     return SequelizeStore.prototype.set.call(this, sid, data, callback);

@@ -58,6 +58,8 @@ export const config = {
   },
   // Time the technician has to answer a rework request; a reminder goes out after it.
   reworkHours: number('REWORK_HOURS', 48),
+  // How long a link sent to the adjuster stays open; a manager may revoke or re-issue it.
+  shareLinkDays: number('SHARE_LINK_DAYS', 30),
   // Admins can always read the local fake mailbox; in development everyone can.
   mailboxOpenToAll: env.MAILBOX_OPEN === 'true',
   mailboxUrl: env.MAILBOX_URL ?? 'http://127.0.0.1:2580',

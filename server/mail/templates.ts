@@ -137,3 +137,19 @@ export function passwordResetEmail(name: string, link: string, expiresAt: Date):
     ),
   };
 }
+
+// To the desk adjuster on acceptance: a link to the read-only summary, no account needed.
+export function deliveryEmail(
+  job: { claimReference: string; street: string; city: string; adjusterName: string | null },
+  shareUrl: string,
+  linkDays: number,
+): Email {
+  const subject = `Capture ready: ${job.claimReference}, ${job.street}`;
+  const greeting = job.adjusterName ? `Dear ${job.adjusterName},` : 'Hello,';
+  const body = `The 3D capture of ${job.street}, ${job.city} for claim ${job.claimReference} has passed quality control. The summary (what was captured and what was not, the damage and the stations that view it) is at the link below, with the PDF to download. The link works for ${linkDays} days and needs no account.`;
+  return {
+    subject,
+    text: `${greeting}\n\n${body}\n\n${shareUrl}\n`,
+    html: layout(`Capture ready: ${job.claimReference}`, [greeting, body], [], { url: shareUrl, label: 'Open the capture summary' }),
+  };
+}

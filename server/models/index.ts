@@ -3,6 +3,7 @@ import { sequelize } from '../db';
 import { AuditEvent } from './audit-event';
 import { CaptureDraft } from './capture-draft';
 import { CaptureRevision } from './capture-revision';
+import { Delivery } from './delivery';
 import { Job } from './job';
 import { OutboxMessage } from './outbox-message';
 import { PasswordToken } from './password-token';
@@ -13,6 +14,7 @@ import { ReworkItem } from './rework-item';
 import { Rubric } from './rubric';
 import { SecondReview } from './second-review';
 import { Session } from './session';
+import { ShareLink } from './share-link';
 import { StoredFile } from './stored-file';
 import { User } from './user';
 
@@ -31,6 +33,8 @@ SecondReview.initModel(sequelize);
 AuditEvent.initModel(sequelize);
 OutboxMessage.initModel(sequelize);
 PasswordToken.initModel(sequelize);
+ShareLink.initModel(sequelize);
+Delivery.initModel(sequelize);
 
 Job.belongsTo(User, { as: 'technician', foreignKey: 'technicianId' });
 Job.belongsTo(User, { as: 'createdBy', foreignKey: 'createdById' });
@@ -48,6 +52,7 @@ export {
   AuditEvent,
   CaptureDraft,
   CaptureRevision,
+  Delivery,
   Job,
   OutboxMessage,
   PasswordToken,
@@ -59,6 +64,7 @@ export {
   SecondReview,
   sequelize,
   Session,
+  ShareLink,
   StoredFile,
   User,
 };

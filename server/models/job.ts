@@ -46,6 +46,12 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
   declare claimedById: number | null;
   declare claimedAt: Date | null;
   declare claimExpiresAt: Date | null;
+  declare clientName: string | null;
+  declare adjusterName: string | null;
+  declare adjusterEmail: string | null;
+  declare policyholderName: string | null;
+  declare policyholderPhone: string | null;
+  declare accessNotes: string | null;
   declare technicianId: ForeignKey<User['id']>;
   declare createdById: ForeignKey<User['id']> | null;
   declare createdAt: CreationOptional<Date>;
@@ -76,6 +82,12 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
         claimedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         claimedAt: { type: DataTypes.DATE(3), allowNull: true },
         claimExpiresAt: { type: DataTypes.DATE(3), allowNull: true },
+        clientName: { type: DataTypes.STRING(120), allowNull: true },
+        adjusterName: { type: DataTypes.STRING(120), allowNull: true },
+        adjusterEmail: { type: DataTypes.STRING(254), allowNull: true },
+        policyholderName: { type: DataTypes.STRING(120), allowNull: true },
+        policyholderPhone: { type: DataTypes.STRING(40), allowNull: true },
+        accessNotes: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE(3),
         updatedAt: DataTypes.DATE(3),
       },

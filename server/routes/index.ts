@@ -1,5 +1,6 @@
 import type { Router } from 'express';
 
+import { deliveryRouter } from './delivery';
 import { filesRouter } from './files';
 import { healthRouter } from './health';
 import { jobsRouter } from './jobs';
@@ -12,6 +13,7 @@ import { reviewsRouter } from './reviews';
 import { reworkRouter } from './rework';
 import { rubricsRouter } from './rubrics';
 import { sessionRouter } from './session';
+import { shareRouter } from './share';
 import { techniciansRouter } from './technicians';
 import { trendsRouter } from './trends';
 import { usersRouter } from './users';
@@ -34,4 +36,6 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api/mailbox', router: mailboxRouter },
   { prefix: '/api/outbox', router: outboxRouter },
   { prefix: '/api/trends', router: trendsRouter },
+  { prefix: '/api', router: deliveryRouter },
+  { prefix: '/api/share', router: shareRouter },
 ];

@@ -3,8 +3,9 @@ import { body, param, query } from 'express-validator';
 import multer from 'multer';
 
 import type { CaptureRecord } from '../../shared/capture-record';
-import { FILE_KINDS, type FileKind, fileTooLargeMessage } from '../../shared/files';
-import { JOB_STATUSES, type JobSort, type JobStatus, pickJobInput } from '../../shared/jobs';
+import { CONTACT_FIELDS } from '../../shared/contacts';
+import { fileTooLargeMessage, UPLOAD_KINDS, type UploadKind } from '../../shared/files';
+import { JOB_STATUSES, type JobSort, type JobStatus, pickContacts, pickJobInput } from '../../shared/jobs';
 import { config } from '../config';
 import { HttpError, invalid } from '../errors';
 import { requireBaseVersion } from '../middleware/base-version';
@@ -61,7 +62,10 @@ jobsRouter.get('/:id', anyJobReader, validate(jobId), async (req, res) => {
 
 jobsRouter.patch('/:id', jobManagers, validate(jobId, ...jobUpdateRules), async (req, res) => {
   const { technicianId, dueAt, priority, siteVisitDate } = req.body;
-  res.json({ job: await updateJob(req.user!, Number(req.params.id), { technicianId, dueAt, priority, siteVisitDate }) });
+  // Contacts sent (even blank, which clears one) change; contacts not sent stay as they are.
+  const contacts = pickContacts(req.body);
+  const sentContacts = Object.fromEntries(CONTACT_FIELDS.filter((f) => req.body[f] !== undefined).map((f) => [f, contacts[f]]));
+  res.json({ job: await updateJob(req.user!, Number(req.params.id), { technicianId, dueAt, priority, siteVisitDate, ...sentContacts }) });
 });
 
 jobsRouter.put('/:id/record', technicianOnly, requireBaseVersion, validate(jobId, ...captureRecordRules), async (req, res) => {
@@ -138,11 +142,11 @@ jobsRouter.post(
   singleFile,
   validate(
     jobId,
-    body('kind', `Choose one of: ${FILE_KINDS.join(', ')}`).isIn(FILE_KINDS),
+    body('kind', `Choose one of: ${UPLOAD_KINDS.join(', ')}`).isIn(UPLOAD_KINDS),
     body('file', 'Choose a file to upload').custom((_v, { req }) => Boolean(req.file && req.file.size > 0)),
   ),
   async (req, res) => {
-    res.status(201).json({ file: await uploadFile(req.user!, Number(req.params.id), req.body.kind as FileKind, req.file!) });
+    res.status(201).json({ file: await uploadFile(req.user!, Number(req.params.id), req.body.kind as UploadKind, req.file!) });
   },
 );
 

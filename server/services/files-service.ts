@@ -2,7 +2,7 @@ import crypto from 'node:crypto';
 
 import { fromBuffer } from 'file-type';
 
-import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, type FileKind } from '../../shared/files';
+import { ACCEPTED_DESCRIPTION, ACCEPTED_TYPES, FILE_KIND_LABELS, type UploadKind } from '../../shared/files';
 import { HttpError, invalid, notFound } from '../errors';
 import { StoredFile } from '../models';
 import { deleteObject, getObjectStream, putObject, StorageUnavailable } from '../storage/s3';
@@ -36,7 +36,7 @@ function assertFilesEditable(status: string) {
   }
 }
 
-export async function uploadFile(actor: Actor, jobId: number, kind: FileKind, upload: { originalname: string; buffer: Buffer }) {
+export async function uploadFile(actor: Actor, jobId: number, kind: UploadKind, upload: { originalname: string; buffer: Buffer }) {
   const job = await findJobFor(actor, jobId);
   assertAssignedTechnician(actor, job);
   assertFilesEditable(job.status);

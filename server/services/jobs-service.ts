@@ -2,6 +2,7 @@ import { col, fn, Op } from 'sequelize';
 
 import type { JobDetail } from '../../shared/api-types';
 import { emptyCaptureRecord } from '../../shared/capture-record';
+import { type ClaimContacts, CONTACT_FIELDS } from '../../shared/contacts';
 import { effectiveDueAt } from '../../shared/due-clock';
 import {
   JOB_SORT_DEFAULT_DIR,
@@ -188,7 +189,7 @@ export async function createJob(actor: Actor, input: JobInput): Promise<JobSumma
 export async function updateJob(
   actor: Actor,
   jobId: number,
-  changes: Partial<Pick<JobInput, 'technicianId' | 'dueAt' | 'priority' | 'siteVisitDate'>>,
+  changes: Partial<Pick<JobInput, 'technicianId' | 'dueAt' | 'priority' | 'siteVisitDate' | keyof ClaimContacts>>,
 ) {
   if (changes.technicianId !== undefined) await assertActiveTechnician(changes.technicianId);
   await inTransaction(async (transaction) => {
@@ -218,13 +219,15 @@ export async function getJobSummary(actor: Actor, jobId: number): Promise<JobSum
 
 export async function getJobDetail(actor: Actor, jobId: number): Promise<JobDetail> {
   const summary = await getJobSummary(actor, jobId);
-  const [draft, revisions, files] = await Promise.all([
+  const [row, draft, revisions, files] = await Promise.all([
+    Job.findByPk(jobId, { attributes: [...CONTACT_FIELDS] }),
     CaptureDraft.findByPk(jobId),
     CaptureRevision.findAll({ where: { jobId }, attributes: ['number', 'submittedAt'], order: [['number', 'ASC']] }),
     StoredFile.findAll({ where: { jobId, detachedAt: null }, order: [['id', 'ASC']] }),
   ]);
   return {
     job: summary,
+    contacts: Object.fromEntries(CONTACT_FIELDS.map((f) => [f, row?.[f] ?? null])) as ClaimContacts,
     record: draft?.data ?? emptyCaptureRecord(),
     recordVersion: draft?.version ?? 0,
     recordSavedAt: draft ? draft.updatedAt.toISOString() : null,

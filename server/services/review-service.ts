@@ -15,6 +15,7 @@ import { recordEvent } from './audit-service';
 import { hiddenFirstReviews } from './blind-review-service';
 import { assertHoldsClaim } from './claims-service';
 import { queueDecisionEmail } from './decision-email-service';
+import { queueDelivery } from './delivery-service';
 import { toQueueRow } from './queue-service';
 import { dropReviewDraft, ownReviewDraft } from './review-draft-service';
 import { toReworkItemView } from './rework-service';
@@ -169,6 +170,8 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
       reviewerName: actor.name,
       decidedAt: now,
     });
+    // The adjuster's summary and link, built by the worker once this commits.
+    if (input.decision === 'accept') await queueDelivery(transaction, jobId, { notify: true, requestedById: null });
 
     // Drawn from every first decision, so calibration sees rework and recapture calls too.
     const sampled = shouldSampleSecondReview(config.review.secondReviewShare, random);

@@ -1,10 +1,32 @@
 import { body, query } from 'express-validator';
 
-import { JOB_SORTS, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES } from '../../shared/jobs';
+import { CONTACT_FIELDS, CONTACT_MAX_LENGTH, PHONE_PATTERN } from '../../shared/contacts';
+import { JOB_SORTS, LOSS_TYPES, PRIORITIES, PROPERTY_TYPES, UPDATABLE_JOB_FIELDS } from '../../shared/jobs';
 import { SEARCH_MAX_LENGTH } from '../../shared/search';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 const today = () => new Date().toISOString().slice(0, 10);
+
+// The claim's contacts: each optional, text of a bounded length; the e-mail and phone checked.
+const contactRules = [
+  ...CONTACT_FIELDS.filter((f) => f !== 'adjusterEmail' && f !== 'policyholderPhone').map((field) =>
+    body(field, `Text of at most ${CONTACT_MAX_LENGTH[field]} characters`)
+      .optional({ values: 'null' })
+      .isString()
+      .isLength({ max: CONTACT_MAX_LENGTH[field] }),
+  ),
+  body('adjusterEmail', 'Enter an e-mail address like name@example.com')
+    .optional({ values: 'falsy' })
+    .isString()
+    .trim()
+    .isEmail()
+    .isLength({ max: CONTACT_MAX_LENGTH.adjusterEmail }),
+  body('policyholderPhone', 'Enter a phone number: digits, spaces, ( ) - . and an optional leading +')
+    .optional({ values: 'falsy' })
+    .isString()
+    .trim()
+    .matches(PHONE_PATTERN),
+];
 
 export const jobCreateRules = [
   body('claimReference', 'Use 3 to 40 letters, digits or dashes')
@@ -31,6 +53,7 @@ export const jobCreateRules = [
   body('dueAt', 'Enter the delivery due date and time').isISO8601({ strict: true }),
   body('priority', `Choose one of: ${PRIORITIES.join(', ')}`).isIn(PRIORITIES),
   body('technicianId', 'Choose a technician').isInt({ min: 1 }).toInt(),
+  ...contactRules,
 ];
 
 export const jobUpdateRules = [
@@ -44,9 +67,10 @@ export const jobUpdateRules = [
     .isString()
     .matches(ISO_DATE)
     .isISO8601({ strict: true }),
+  ...contactRules,
   body()
-    .custom((v) => v && ['technicianId', 'dueAt', 'priority', 'siteVisitDate'].some((k) => v[k] !== undefined))
-    .withMessage('Send at least one of technicianId, dueAt, priority, siteVisitDate'),
+    .custom((v) => v && [...UPDATABLE_JOB_FIELDS].some((k) => v[k] !== undefined))
+    .withMessage(`Send at least one of ${UPDATABLE_JOB_FIELDS.join(', ')}`),
 ];
 
 export const jobListRules = [

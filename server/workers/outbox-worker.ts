@@ -1,10 +1,11 @@
 import { config } from '../config';
 import { createTransport } from '../mail/transport';
+import { buildPendingSummaries } from '../services/delivery-service';
 import { purgeExpired } from '../services/maintenance-service';
 import { sendPendingEmails } from '../services/outbox-service';
 import { queueOverdueReworkReminders } from '../services/reminder-service';
 
-// Runs in every instance; the outbox leases keep them from sending the same row twice.
+// Runs in every instance; the leases keep them from building or sending the same row twice.
 export function startOutboxWorker() {
   if (config.outbox.intervalMs <= 0) return () => undefined;
   const transport = createTransport();
@@ -20,6 +21,7 @@ export function startOutboxWorker() {
         await queueOverdueReworkReminders();
         await purgeExpired();
       }
+      await buildPendingSummaries();
       await sendPendingEmails(transport);
     } catch (error) {
       console.error('outbox worker:', (error as Error).message);

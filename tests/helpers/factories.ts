@@ -8,6 +8,7 @@ import type { FileKind } from '../../shared/files';
 import type { JobStatus } from '../../shared/jobs';
 import type { Role } from '../../shared/roles';
 import { criterionApplies, scaleMax } from '../../shared/rubric';
+import type { StationAnalysis } from '../../shared/station-analysis';
 import { completeRecord } from './records';
 
 export const TEST_PASSWORD = 'correct-horse-battery';
@@ -78,11 +79,18 @@ export function newJobBody(technicianId: number) {
   };
 }
 
-export async function createRevision(job: Job, number: number, record: CaptureRecord = completeRecord(), submittedAt = new Date()) {
+export async function createRevision(
+  job: Job,
+  number: number,
+  record: CaptureRecord = completeRecord(),
+  submittedAt = new Date(),
+  stationAnalysis: StationAnalysis | null = null,
+) {
   return CaptureRevision.create({
     jobId: job.id,
     number,
     data: record,
+    stationAnalysis,
     files: [],
     findings: { missing: [], warnings: [] },
     submittedById: job.technicianId,
