@@ -21,7 +21,7 @@ type BadInputCase = {
 };
 
 // Routes that take no input at all.
-const NO_INPUT = ['DELETE /api/session', 'DELETE /api/jobs/:id/claim'];
+const NO_INPUT = ['DELETE /api/session', 'DELETE /api/jobs/:id/claim', 'POST /api/jobs/:id/summary', 'POST /api/jobs/:id/share-links'];
 
 const CASES: Record<string, BadInputCase> = {
   'POST /api/session': { as: 'anonymous', tables: ['sessions'], body: { email: 'no', password: '' }, fields: ['email', 'password'] },
@@ -53,13 +53,19 @@ const CASES: Record<string, BadInputCase> = {
       dueAt: 'soon',
       priority: 'asap',
       technicianId: 'tess',
+      adjusterEmail: 'adjuster at carrier',
+      policyholderPhone: 'ring twice',
+      clientName: ['a list'],
     },
     fields: [
+      'adjusterEmail',
       'city',
       'claimReference',
+      'clientName',
       'dueAt',
       'lossDate',
       'lossType',
+      'policyholderPhone',
       'postcode',
       'priority',
       'propertyType',
@@ -74,6 +80,13 @@ const CASES: Record<string, BadInputCase> = {
     prepare: async () => ({ path: `/api/jobs/${(await createJob()).id}` }),
     body: { priority: 'whenever', dueAt: 'tomorrow-ish' },
     fields: ['dueAt', 'priority'],
+  },
+  'DELETE /api/jobs/:id/share-links/:linkId': {
+    as: 'manager',
+    tables: ['share_links'],
+    prepare: async () => ({ path: `/api/jobs/${(await createJob()).id}/share-links/first` }),
+    body: {},
+    fields: ['linkId'],
   },
   'PUT /api/jobs/:id/record': {
     as: 'technician',

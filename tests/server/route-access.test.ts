@@ -10,6 +10,7 @@ import { OutboxMessage, PasswordToken, sequelize } from '../../server/models';
 import { putObject } from '../../server/storage/s3';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { type Role, ROLES } from '../../shared/roles';
+import { deliverableJob } from '../helpers/delivery';
 import {
   claimFor,
   createJob,
@@ -225,6 +226,38 @@ const ROUTES: Record<string, RouteCase> = {
   'GET /api/trends/team': { allowed: ['manager'] },
   'GET /api/trends/reviewers': { allowed: ['manager'] },
   'GET /api/trends/calibration': { allowed: ['manager'] },
+  'GET /api/jobs/:id/delivery': {
+    allowed: ['manager', 'admin'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await deliverableJob(technicianOf(me))).job.id}/delivery` }),
+  },
+  'POST /api/jobs/:id/summary': {
+    allowed: ['manager'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await deliverableJob(technicianOf(me))).job.id}/summary` }),
+  },
+  'POST /api/jobs/:id/share-links': {
+    allowed: ['manager'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await deliverableJob(technicianOf(me))).job.id}/share-links` }),
+  },
+  'DELETE /api/jobs/:id/share-links/:linkId': {
+    allowed: ['manager'],
+    prepare: async (me) => {
+      const { job, link } = await deliverableJob(technicianOf(me));
+      return { path: `/api/jobs/${job.id}/share-links/${link.id}` };
+    },
+  },
+  // The adjuster's view: public, for anyone holding the link.
+  'GET /api/share/:token': { allowed: EVERYONE, prepare: async () => ({ path: `/api/share/${(await deliverableJob()).token}` }) },
+  'GET /api/share/:token/summary.pdf': {
+    allowed: EVERYONE,
+    prepare: async () => ({ path: `/api/share/${(await deliverableJob()).token}/summary.pdf` }),
+  },
+  'GET /api/share/:token/photos/:fileId': {
+    allowed: EVERYONE,
+    prepare: async () => {
+      const { token, photo } = await deliverableJob();
+      return { path: `/api/share/${token}/photos/${photo.id}` };
+    },
+  },
   'GET /api/jobs/:id/station-analysis': {
     allowed: [...ROLES],
     prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/station-analysis` }),
@@ -270,6 +303,8 @@ async function claimedFor(me: { id: number; role: Role } | null) {
   const job = await createSubmittedJob();
   return claimFor(job, me?.role === 'reviewer' ? me.id : (await createUser({ role: 'reviewer' })).id);
 }
+
+const technicianOf = (me: { id: number; role: Role } | null) => (me?.role === 'technician' ? me.id : undefined);
 
 // A job the signed-in technician owns (anyone else's job for the other roles).
 function jobFor(me: { id: number; role: Role } | null) {
