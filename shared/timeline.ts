@@ -7,6 +7,7 @@ const EMAIL_KIND: Record<string, string> = {
   recapture_required: 'recapture notice',
   rework_reminder: 'rework reminder',
   review_outcome: 'review outcome notice',
+  delivery: 'summary link to the adjuster',
 };
 
 export function describeEvent(event: Pick<TimelineEvent, 'type' | 'data'>): string {
@@ -41,6 +42,16 @@ export function describeEvent(event: Pick<TimelineEvent, 'type' | 'data'>): stri
       return `Rework answered: "${d.title}", ${String(d.response).replace('_', ' ')}`;
     case 'dispute_decided':
       return `Dispute on "${d.title}" ${d.outcome}`;
+    case 'summary_queued':
+      return d.notify ? 'Acceptance summary queued for the adjuster' : 'Acceptance summary rebuild requested';
+    case 'summary_built':
+      return 'Acceptance summary built (PDF added to the files)';
+    case 'share_link_issued':
+      return `Share link issued, open until ${String(d.expiresAt).slice(0, 10)}`;
+    case 'share_link_revoked':
+      return 'Share link withdrawn';
+    case 'share_viewed':
+      return `Shared ${d.what === 'pdf' ? 'summary PDF downloaded' : 'summary opened'} from ${d.address}`;
     default:
       return event.type;
   }

@@ -17,6 +17,8 @@ import { colors, fonts, space } from '@/components/ui/theme';
 import { EDITABLE_STATUSES, JOB_STATUS_LABELS, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
 
 import { AssignmentPanel } from './assignment-panel';
+import { ContactsCard } from './contacts-card';
+import { DeliveryPanel } from './delivery-panel';
 import { DueText } from './due-text';
 import { RecordView } from './record-view';
 import { StatusBadge } from './status-badge';
@@ -56,7 +58,11 @@ export function JobScreen({ id }: { id: number }) {
         <Text variant="small">{`Site visit ${formatDate(job.siteVisitDate)} · Technician ${job.technician.name}`}</Text>
       </View>
 
+      <ContactsCard job={job} contacts={query.data.contacts} />
       {user?.role === 'manager' || user?.role === 'admin' ? <AssignmentPanel job={job} /> : null}
+      {(user?.role === 'manager' || user?.role === 'admin') && job.status === 'accepted' ? (
+        <DeliveryPanel jobId={job.id} canChange={user.role === 'manager'} hasAdjusterEmail={Boolean(query.data.contacts.adjusterEmail)} />
+      ) : null}
       {job.status === 'rework_requested' || (latest !== null && latest > 1) ? (
         <ReworkChecklist
           jobId={job.id}

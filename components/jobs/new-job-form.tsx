@@ -1,6 +1,6 @@
 import { useRouter } from 'expo-router';
 import { Controller, useForm } from 'react-hook-form';
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet, type TextInputProps, View } from 'react-native';
 
 import { ApiError } from '@/components/lib/api-client';
 import { type NewJob, useJobCreateMutation } from '@/components/queries/jobs';
@@ -10,8 +10,10 @@ import { ChoiceField } from '@/components/ui/choice-field';
 import { DateField } from '@/components/ui/date-field';
 import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
+import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { colors, space } from '@/components/ui/theme';
+import { CONTACT_FIELDS, CONTACT_LABELS } from '@/shared/contacts';
 import {
   LOSS_TYPE_LABELS,
   LOSS_TYPES,
@@ -30,6 +32,8 @@ type Values = Omit<NewJob, 'technicianId' | 'siteVisitDate' | 'dueAt'> & {
   dueDate: string;
   dueTime: string;
 };
+
+const blankContacts = Object.fromEntries(CONTACT_FIELDS.map((f) => [f, ''])) as Record<(typeof CONTACT_FIELDS)[number], string>;
 
 const options = <T extends string>(values: readonly T[], labels: Record<T, string>) =>
   values.map((value) => ({ value, label: labels[value] }));
@@ -52,6 +56,7 @@ export function NewJobForm() {
       dueTime: '17:00',
       priority: 'normal',
       technicianId: '',
+      ...blankContacts,
     },
   });
 
@@ -101,12 +106,13 @@ export function NewJobForm() {
     />
   );
 
-  const text = (name: keyof Values, label: string, hint?: string) => (
+  const text = (name: keyof Values, label: string, hint?: string, input: Partial<TextInputProps> = {}) => (
     <Controller
       control={control}
       name={name}
       render={({ field, fieldState }) => (
         <TextField
+          {...input}
           label={label}
           hint={hint}
           value={String(field.value ?? '')}
@@ -188,6 +194,31 @@ export function NewJobForm() {
             />
           )}
         />
+        <Text variant="heading" role="heading" aria-level={2}>
+          Claim contacts
+        </Text>
+        <Text variant="muted">
+          All optional. The technician sees them on the job; the adjuster receives the summary link on acceptance.
+        </Text>
+        {text('clientName', CONTACT_LABELS.clientName, 'A carrier, third-party administrator or adjusting firm')}
+        <View style={styles.row}>
+          <View style={styles.grow}>{text('adjusterName', CONTACT_LABELS.adjusterName)}</View>
+          <View style={styles.grow}>
+            {text('adjusterEmail', CONTACT_LABELS.adjusterEmail, undefined, {
+              inputMode: 'email',
+              autoCapitalize: 'none',
+              autoComplete: 'off',
+            })}
+          </View>
+        </View>
+        <View style={styles.row}>
+          <View style={styles.grow}>{text('policyholderName', CONTACT_LABELS.policyholderName)}</View>
+          <View style={styles.grow}>{text('policyholderPhone', CONTACT_LABELS.policyholderPhone, undefined, { inputMode: 'tel' })}</View>
+        </View>
+        {text('accessNotes', CONTACT_LABELS.accessNotes, 'Key or lockbox, pets, occupants, hazards known before the visit', {
+          multiline: true,
+          numberOfLines: 3,
+        })}
         <Button label="Create job" onPress={submit} busy={create.isPending} />
       </View>
     </Screen>
