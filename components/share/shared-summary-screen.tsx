@@ -2,6 +2,7 @@ import { Image, ScrollView, StyleSheet, useWindowDimensions, View } from 'react-
 
 import { lazyView } from '@/components/lib/lazy-view';
 import { useSharedSummaryQuery } from '@/components/queries/delivery';
+import { useDeferredFonts } from '@/components/ui/deferred-fonts';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
@@ -13,6 +14,7 @@ const PlanSketch = lazyView(() => import('./plan-sketch').then((m) => m.default)
 // The adjuster's read-only page: the same content as the summary PDF, with the photos and the
 // PDF to download. Nothing else of Sightline is reachable from here.
 export function SharedSummaryScreen({ token }: { token: string }) {
+  useDeferredFonts();
   const query = useSharedSummaryQuery(token);
   const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
   return (

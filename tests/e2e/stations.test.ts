@@ -10,7 +10,11 @@ async function jobIdOf(claimReference: string) {
   const browser = await launchBrowser(DESKTOP);
   try {
     return await as(browser.request, 'mara.', async () => {
-      const { jobs } = await call<{ jobs: { id: number; claimReference: string }[] }>(browser.request, 'get', '/api/jobs');
+      const { jobs } = await call<{ jobs: { id: number; claimReference: string }[] }>(
+        browser.request,
+        'get',
+        `/api/jobs?q=${claimReference}`,
+      );
       return jobs.find((j) => j.claimReference === claimReference)!.id;
     });
   } finally {

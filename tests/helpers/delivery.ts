@@ -22,6 +22,7 @@ export async function deliverableJob(technicianId?: number) {
   await job.update({ status: 'accepted', currentRevision: 1 });
   const summary = await createStoredFile(job.id, job.technicianId, {
     kind: 'summary',
+    originalName: `Capture summary ${job.claimReference}.pdf`,
     contentType: 'application/pdf',
     sizeBytes: TINY_PDF.length,
   });
