@@ -48,7 +48,14 @@ app.get('/limit/jobs', async (req, res) => {
         `SELECT ${JOB_COLUMNS} FROM (SELECT id FROM jobs WHERE claim_reference LIKE ? UNION
            SELECT id FROM jobs WHERE MATCH(street, city, postcode, technician_name) AGAINST (? IN BOOLEAN MODE)) s
          JOIN jobs j ON j.id = s.id JOIN users t ON t.id = j.technician_id ORDER BY j.due_at DESC, j.id DESC LIMIT 50`,
-        [`${q}%`, `+${q}*`],
+        [
+          `${q}%`,
+          q
+            .split(/[^\p{L}\p{N}]+/u)
+            .filter((w) => w.length >= 3)
+            .map((w) => `+${w}*`)
+            .join(' ') || '+none*',
+        ],
       ),
     );
     return;

@@ -131,6 +131,8 @@ export async function seedBenchData(db: Sequelize, scale: number): Promise<SeedS
      FROM reviews r CROSS JOIN (${keys}) c`,
   );
 
+  await run('DELETE FROM job_state_counts');
+  await run('INSERT INTO job_state_counts (status, n) SELECT status, COUNT(*) FROM jobs GROUP BY status');
   await run('SET @sightline_skip_rollups = NULL');
   for (const sql of REBUILD_STATEMENTS) await run(sql);
   await db.query('ANALYZE TABLE jobs, reviews, review_scores, users', { type: QueryTypes.SELECT });

@@ -4,6 +4,7 @@
 // by primary key: no filesort over the queue, no table scan for the count.
 import { QueryTypes } from 'sequelize';
 
+import type { JobStatus } from '../../shared/jobs';
 import { fullTextQuery, likePrefix, searchTerms } from '../../shared/search';
 import { sequelize } from '../db';
 
@@ -60,6 +61,15 @@ export async function countJobs(q: Pick<JobPageQuery, 'conditions' | 'params' | 
   const sql = cap ? `SELECT COUNT(*) AS n FROM (SELECT 1 ${from} LIMIT :cap) capped` : `SELECT COUNT(*) AS n ${from}`;
   const [row] = await sequelize.query<{ n: number }>(sql, { replacements: params, type: QueryTypes.SELECT });
   return Number(row.n);
+}
+
+// Jobs per state, as the jobs triggers keep them (job_state_counts): a read of a few rows.
+export async function stateCounts(states?: readonly JobStatus[]): Promise<Partial<Record<JobStatus, number>>> {
+  const rows = await sequelize.query<{ status: JobStatus; n: number }>(
+    `SELECT status, n FROM job_state_counts${states ? ' WHERE status IN (:states)' : ''}`,
+    { replacements: { states: states ?? [] }, type: QueryTypes.SELECT },
+  );
+  return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)]));
 }
 
 // Values as the mariadb driver returns them, in the API's shapes.

@@ -18,7 +18,7 @@ import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
-import { countJobs, isoTime, type JobPageQuery, pageOfJobs } from './job-page-query';
+import { countJobs, isoTime, type JobPageQuery, pageOfJobs, stateCounts } from './job-page-query';
 
 type Actor = Express.User;
 
@@ -130,12 +130,18 @@ const summaryFrom = (r: JobSqlRow): JobSummary => ({
 
 export async function listJobs(actor: Actor, query: JobListQuery): Promise<JobPage> {
   const pageQuery = jobListPageQuery(actor, query);
+  // Without a technician or a search the total is the kept count of the states shown (exact);
+  // otherwise it is counted from the index, up to a cap.
+  const byState = actor.role !== 'technician' && !query.technicianId && !query.q;
   const [rows, counted] = await Promise.all([
     pageOfJobs<JobSqlRow>(pageQuery, JOB_SELECT, JOB_JOINS),
-    countJobs(pageQuery, JOB_COUNT_CAP + 1),
+    byState
+      ? stateCounts(query.status?.length ? query.status : undefined).then((c) => Object.values(c).reduce((s, n) => s + (n ?? 0), 0))
+      : countJobs(pageQuery, JOB_COUNT_CAP + 1),
   ]);
-  const total = Math.min(counted, JOB_COUNT_CAP);
-  return { jobs: rows.map(summaryFrom), total, totalIsAtLeast: counted > JOB_COUNT_CAP, page: query.page ?? 1, pageSize: pageQuery.limit };
+  const capped = !byState && counted > JOB_COUNT_CAP;
+  const total = capped ? JOB_COUNT_CAP : counted;
+  return { jobs: rows.map(summaryFrom), total, totalIsAtLeast: capped, page: query.page ?? 1, pageSize: pageQuery.limit };
 }
 
 async function revisionCounts(jobIds: number[]) {

@@ -1,10 +1,7 @@
-import { QueryTypes } from 'sequelize';
-
 import type { JobStatus } from '../../shared/jobs';
 import { QUEUE_STATUSES, type QueueFilters, type QueuePage, type QueueRow, type QueueSort } from '../../shared/review';
 import type { Job, User } from '../models';
-import { sequelize } from '../models';
-import { countJobs, isoTime, type JobPageQuery, pageOfJobs } from './job-page-query';
+import { countJobs, isoTime, type JobPageQuery, pageOfJobs, stateCounts } from './job-page-query';
 
 type Actor = Express.User;
 
@@ -109,13 +106,9 @@ export function queuePageQuery(actor: Actor, params: QueueParamsIn) {
   return { page, wholeQueue: isDefault && !params.search };
 }
 
-// Counts per state for the whole queue, ignoring the filters: read from the status index.
-async function stateCounts() {
-  const rows = await sequelize.query<{ status: JobStatus; n: number }>(
-    `SELECT status, COUNT(*) AS n FROM jobs WHERE status IN (:states) GROUP BY status`,
-    { replacements: { states: QUEUE_STATUSES }, type: QueryTypes.SELECT },
-  );
-  return Object.fromEntries(rows.map((r) => [r.status, Number(r.n)])) as Partial<Record<JobStatus, number>>;
+// Counts per state for the whole queue, ignoring the filters: the counts the jobs triggers keep.
+async function queueStateCounts() {
+  return stateCounts(QUEUE_STATUSES);
 }
 
 // The queue page's columns and joins: everything a row shows, in the one statement.
@@ -164,7 +157,7 @@ function queueRowFrom(r: QueueSqlRow, now: Date): QueueRow {
 
 export async function listQueue(actor: Actor, params: QueueParamsIn): Promise<QueuePage> {
   const { page, wholeQueue } = queuePageQuery(actor, params);
-  const [rows, counts] = await Promise.all([pageOfJobs<QueueSqlRow>(page, QUEUE_SELECT, QUEUE_JOINS), stateCounts()]);
+  const [rows, counts] = await Promise.all([pageOfJobs<QueueSqlRow>(page, QUEUE_SELECT, QUEUE_JOINS), queueStateCounts()]);
   // The unfiltered queue's size is the sum of its states' counts: no second count needed.
   const total = wholeQueue ? DEFAULT_STATUSES.reduce((sum, s) => sum + (counts[s] ?? 0), 0) : await countJobs(page);
   const now = new Date();

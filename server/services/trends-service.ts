@@ -65,26 +65,31 @@ export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
   }
   const { span, where, params } = rollupWhere(f);
 
-  const weekly = await select<{ week: string; reviews: unknown; score_sum: unknown; score_n: unknown; rework: unknown }>(
-    `SELECT DATE_FORMAT(t.week, '%Y-%m-%d') AS week, SUM(t.reviews) AS reviews, SUM(t.score_sum) AS score_sum,
-            SUM(t.score_n) AS score_n, SUM(t.rework) AS rework
-     FROM trend_technician_weeks t WHERE ${where} GROUP BY t.week ORDER BY t.week`,
-    params,
-  );
-  const [totals] = (await select<Totals>(`SELECT ${TOTALS} FROM trend_technician_weeks t WHERE ${where}`, params)) as [Totals];
-  const hours = await select<{ value: number; n: number }>(
-    `SELECT t.hours AS value, SUM(t.n) AS n FROM trend_turnaround_weeks t WHERE ${where} GROUP BY t.hours`,
-    params,
-  );
-  const criteria = await select<{ criterion_key: string; n: unknown }>(
-    `SELECT t.criterion_key, SUM(t.below_full) AS n FROM trend_criterion_weeks t WHERE ${where} GROUP BY t.criterion_key`,
-    params,
-  );
-  const reasons = await select<{ stock_reason: string; n: unknown }>(
-    `SELECT t.stock_reason, SUM(t.n) AS n FROM trend_reason_weeks t WHERE ${where} GROUP BY t.stock_reason`,
-    params,
-  );
-  const titles = new Map((await currentRubric()).criteria.map((c) => [c.key, c.title]));
+  // Independent reads of the rollups, side by side; the period's totals are the weeks' sums.
+  const [weekly, hours, criteria, reasons, rubric] = await Promise.all([
+    select<Totals & { week: string }>(
+      `SELECT DATE_FORMAT(t.week, '%Y-%m-%d') AS week, ${TOTALS} FROM trend_technician_weeks t WHERE ${where} GROUP BY t.week ORDER BY t.week`,
+      params,
+    ),
+    select<{ value: number; n: number }>(
+      `SELECT t.hours AS value, SUM(t.n) AS n FROM trend_turnaround_weeks t WHERE ${where} GROUP BY t.hours`,
+      params,
+    ),
+    select<{ criterion_key: string; n: unknown }>(
+      `SELECT t.criterion_key, SUM(t.below_full) AS n FROM trend_criterion_weeks t WHERE ${where} GROUP BY t.criterion_key`,
+      params,
+    ),
+    select<{ stock_reason: string; n: unknown }>(
+      `SELECT t.stock_reason, SUM(t.n) AS n FROM trend_reason_weeks t WHERE ${where} GROUP BY t.stock_reason`,
+      params,
+    ),
+    currentRubric(),
+  ]);
+  const sum = (key: keyof Totals) => weekly.reduce((total, w) => total + Number(w[key] ?? 0), 0);
+  const totals = Object.fromEntries(
+    (['reviews', 'first_total', 'first_accepted', 'recaptures', 'accepted', 'accepted_revision_sum'] as const).map((k) => [k, sum(k)]),
+  ) as Record<'reviews' | 'first_total' | 'first_accepted' | 'recaptures' | 'accepted' | 'accepted_revision_sum', number>;
+  const titles = new Map(rubric.criteria.map((c) => [c.key, c.title]));
 
   const reviews = Number(totals.reviews ?? 0);
   const firstTotal = Number(totals.first_total ?? 0);
@@ -112,20 +117,18 @@ export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
 
 export async function teamTable(f: Filters): Promise<TeamRow[]> {
   const { where, params } = rollupWhere({ ...f, technicianId: undefined });
-  const technicians = await User.findAll({
-    where: { role: 'technician', active: true },
-    attributes: ['id', 'name'],
-    order: [['name', 'ASC']],
-  });
-  const sums = await select<Totals & { technician_id: number }>(
-    `SELECT t.technician_id, ${TOTALS} FROM trend_technician_weeks t WHERE ${where} GROUP BY t.technician_id`,
-    params,
-  );
-  const hours = await select<{ k: number; value: number; n: number }>(
-    `SELECT t.technician_id AS k, t.hours AS value, SUM(t.n) AS n FROM trend_turnaround_weeks t WHERE ${where}
-     GROUP BY t.technician_id, t.hours`,
-    params,
-  );
+  const [technicians, sums, hours] = await Promise.all([
+    User.findAll({ where: { role: 'technician', active: true }, attributes: ['id', 'name'], order: [['name', 'ASC']] }),
+    select<Totals & { technician_id: number }>(
+      `SELECT t.technician_id, ${TOTALS} FROM trend_technician_weeks t WHERE ${where} GROUP BY t.technician_id`,
+      params,
+    ),
+    select<{ k: number; value: number; n: number }>(
+      `SELECT t.technician_id AS k, t.hours AS value, SUM(t.n) AS n FROM trend_turnaround_weeks t WHERE ${where}
+       GROUP BY t.technician_id, t.hours`,
+      params,
+    ),
+  ]);
   const sumsOf = new Map(sums.map((s) => [Number(s.technician_id), s]));
   const medianOf = medianByKey(hours);
   return technicians.map((u) => {

@@ -91,6 +91,26 @@ describe('GET /api/jobs paged, sorted and searched', () => {
   });
 });
 
+describe('kept state counts', () => {
+  it('equal a count of the jobs table after inserts, state changes and deletes', async () => {
+    const jobs = await Promise.all([1, 2, 3].map(() => createSubmittedJob()));
+    await jobs[0].update({ status: 'in_review' });
+    await jobs[1].update({ status: 'accepted' });
+    await jobs[2].destroy();
+    const kept = await sequelize.query<{ status: string; n: number }>(
+      'SELECT status, n FROM job_state_counts WHERE n <> 0 ORDER BY status',
+      {
+        type: QueryTypes.SELECT,
+      },
+    );
+    const counted = await sequelize.query<{ status: string; n: number }>(
+      'SELECT status, COUNT(*) AS n FROM jobs GROUP BY status ORDER BY status',
+      { type: QueryTypes.SELECT },
+    );
+    expect(kept.map((r) => [r.status, Number(r.n)])).toEqual(counted.map((r) => [r.status, Number(r.n)]));
+  });
+});
+
 describe('GET /api/queue search', () => {
   it('searches within the queue only', async () => {
     const street = word();
