@@ -109,6 +109,15 @@ async function main() {
         kind: 'limit',
       },
       { name: 'jobs, page 1 (manager)', path: '/api/jobs?pageSize=50', limit: '/limit/jobs', cookie: manager, kind: 'limit' },
+      // An office types the claim number it was given: a prefix of the claim reference.
+      {
+        name: 'jobs, search "BNC-00421"',
+        path: '/api/jobs?pageSize=50&q=BNC-00421',
+        limit: '/limit/jobs?q=BNC-00421',
+        cookie: manager,
+        kind: 'limit',
+      },
+      // The worst case: one street word that one job in eight matches (12,500 jobs to sort).
       {
         name: 'jobs, search "dunmere"',
         path: '/api/jobs?pageSize=50&q=dunmere',
