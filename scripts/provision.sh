@@ -31,6 +31,13 @@ ensure_chromium_installed() {
   fi
 }
 
+ensure_poppler_installed() {
+  if ! command -v pdftotext >/dev/null 2>&1; then
+    log "installing poppler-utils from Debian's packages (summary PDF tests)"
+    apt_install poppler-utils
+  fi
+}
+
 ensure_haproxy_installed() {
   if ! command -v haproxy >/dev/null 2>&1 && [ ! -x /usr/sbin/haproxy ]; then
     log "installing HAProxy from Debian's packages (two-instance tests)"

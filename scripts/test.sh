@@ -21,6 +21,7 @@ ensure_node_modules
 ensure_mariadb_installed
 ensure_chromium_installed
 ensure_haproxy_installed
+ensure_poppler_installed
 start_mariadb
 # A fresh test database every run, so no test depends on what an earlier run left.
 db_root -e "DROP DATABASE IF EXISTS \`$DB_NAME\`; DROP DATABASE IF EXISTS \`${DB_NAME}_migrations\`;"
