@@ -58,7 +58,7 @@ export function JobScreen({ id }: { id: number }) {
         <Text variant="small">{`Site visit ${formatDate(job.siteVisitDate)} · Technician ${job.technician.name}`}</Text>
       </View>
 
-      <ContactsCard job={job} contacts={query.data.contacts} />
+      <ContactsCard job={job} contacts={query.data.contacts} canEdit={user?.role === 'manager' || user?.role === 'admin'} />
       {user?.role === 'manager' || user?.role === 'admin' ? <AssignmentPanel job={job} /> : null}
       {(user?.role === 'manager' || user?.role === 'admin') && job.status === 'accepted' ? (
         <DeliveryPanel jobId={job.id} canChange={user.role === 'manager'} hasAdjusterEmail={Boolean(query.data.contacts.adjusterEmail)} />

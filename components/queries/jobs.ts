@@ -4,6 +4,7 @@ import { keepPreviousData, type QueryClient, useMutation, useQuery, useQueryClie
 import { withDeviceCopy } from '@/components/device/device-copy';
 import { api } from '@/components/lib/api-client';
 import type { JobDetail, RevisionView } from '@/shared/api-types';
+import type { ClaimContacts } from '@/shared/contacts';
 import type { JobInput, JobListQuery, JobPage, JobSummary, Priority } from '@/shared/jobs';
 import type { StationAnalysis } from '@/shared/station-analysis';
 
@@ -92,7 +93,7 @@ export function useJobCreateMutation() {
 export function useJobUpdateMutation(jobId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (changes: { technicianId?: number; priority?: Priority; dueAt?: string }) =>
+    mutationFn: (changes: { technicianId?: number; priority?: Priority; dueAt?: string } & Partial<Record<keyof ClaimContacts, string>>) =>
       api.patch<{ job: JobSummary }>(`/api/jobs/${jobId}`, changes),
     onSuccess: () => invalidateJobs(queryClient),
   });
