@@ -4,7 +4,9 @@ import { type QueryInterface, QueryTypes, type Transaction } from 'sequelize';
 
 import { analyseFor } from '../server/services/station-service';
 import { putObject } from '../server/storage/s3';
+import type { ClaimContacts } from '../shared/contacts';
 import { DEFAULT_RUBRIC } from '../shared/default-rubric';
+import { demoContacts } from './data/demo-contacts';
 import { type DemoJob, demoJobs } from './data/demo-jobs';
 import { DEMO_PEOPLE } from './data/demo-people';
 import { demoStationCsv } from './data/demo-stations';
@@ -45,6 +47,17 @@ export async function up(queryInterface: QueryInterface) {
         job,
         { technicians, reviewers, managerId, rubricId: rubric.id, now },
         WITH_STATION_FILE.has(index) ? index : null,
+        demoContacts(index),
+      );
+    }
+    // The three latest acceptances get their summary and adjuster e-mail built by the worker
+    // once the app runs (not under test: the test server must not write while tests count rows).
+    if (process.env.NODE_ENV !== 'test') {
+      await db.query(
+        `INSERT INTO deliveries (job_id, notify, requested_by_id, status, attempts, next_attempt_at, created_at)
+         SELECT j.id, 1, NULL, 'pending', 0, NOW(3), NOW(3) FROM jobs j
+         WHERE j.status = 'accepted' AND j.claim_reference IN (:refs) ORDER BY j.id DESC LIMIT 3`,
+        { replacements: { refs: fresh.map((j) => j.claimReference) }, type: QueryTypes.INSERT, transaction },
       );
     }
   });
@@ -52,7 +65,14 @@ export async function up(queryInterface: QueryInterface) {
 
 type Ids = { technicians: number[]; reviewers: number[]; managerId: number; rubricId: number; now: Date };
 
-async function insertJob(queryInterface: QueryInterface, transaction: Transaction, job: DemoJob, ids: Ids, stationSeed: number | null) {
+async function insertJob(
+  queryInterface: QueryInterface,
+  transaction: Transaction,
+  job: DemoJob,
+  ids: Ids,
+  stationSeed: number | null,
+  contacts: ClaimContacts,
+) {
   const db = queryInterface.sequelize;
   const technicianId = ids.technicians[job.technicianIndex];
   const latest = job.revisions.at(-1);
@@ -80,6 +100,12 @@ async function insertJob(queryInterface: QueryInterface, transaction: Transactio
         status: job.status,
         technician_id: technicianId,
         created_by_id: ids.managerId,
+        client_name: contacts.clientName,
+        adjuster_name: contacts.adjusterName,
+        adjuster_email: contacts.adjusterEmail,
+        policyholder_name: contacts.policyholderName,
+        policyholder_phone: contacts.policyholderPhone,
+        access_notes: contacts.accessNotes,
         created_at: created,
         updated_at: ids.now,
       },
