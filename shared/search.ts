@@ -23,3 +23,11 @@ export function fullTextQuery(terms: SearchTerms): string | null {
 export function likePrefix(text: string): string {
   return `${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
 }
+
+// A claim reference typed whole or in part ("MRK-26-04", "0421"): one token with a digit.
+// When such a text starts a claim reference, the word search is skipped: the office has the
+// claim number, and a full-text prefix search costs tens of milliseconds even with no match.
+export function looksLikeClaimReference(text: string): boolean {
+  const t = text.trim();
+  return /^[\p{L}\p{N}-]+$/u.test(t) && /\d/.test(t);
+}

@@ -5,6 +5,8 @@
 import express from 'express';
 import { createPool } from 'mariadb';
 
+import { looksLikeClaimReference } from '../../shared/search';
+
 const pool = createPool({
   host: process.env.DB_HOST ?? '127.0.0.1',
   port: Number(process.env.DB_PORT ?? 3407),
@@ -41,6 +43,16 @@ const JOB_COLUMNS = `j.id, j.claim_reference, j.street, j.city, j.postcode, j.pr
   j.due_at, j.priority, j.status, t.id AS technician_id, t.name AS technician_name`;
 
 app.get('/limit/jobs', async (req, res) => {
+  if (req.query.q && looksLikeClaimReference(String(req.query.q))) {
+    // A claim number: the claim-reference index alone.
+    res.json(
+      await pool.query(
+        `SELECT ${JOB_COLUMNS} FROM jobs j JOIN users t ON t.id = j.technician_id WHERE j.claim_reference LIKE ? ORDER BY j.due_at DESC, j.id DESC LIMIT 50`,
+        [`${String(req.query.q)}%`],
+      ),
+    );
+    return;
+  }
   if (req.query.q) {
     const q = String(req.query.q);
     res.json(

@@ -5,7 +5,7 @@
 import { QueryTypes } from 'sequelize';
 
 import type { JobStatus } from '../../shared/jobs';
-import { fullTextQuery, likePrefix, searchTerms } from '../../shared/search';
+import { fullTextQuery, likePrefix, looksLikeClaimReference, searchTerms } from '../../shared/search';
 import { sequelize } from '../db';
 
 export type JobPageQuery = {
@@ -15,6 +15,8 @@ export type JobPageQuery = {
   limit: number;
   offset: number;
   search?: string;
+  // Search the claim reference only (see resolveSearch).
+  claimOnly?: boolean;
   // The index that serves this filter and order, named so the plan never depends on table
   // statistics (on a small or freshly loaded table MariaDB may otherwise choose a filesort).
   index?: string;
@@ -22,11 +24,11 @@ export type JobPageQuery = {
 
 // Ids of the jobs a search matches: the claim reference from its start, or every word of
 // the address and the technician's name from its start (full-text index).
-function searchSource(search: string | undefined, params: Record<string, unknown>) {
+function searchSource(search: string | undefined, params: Record<string, unknown>, claimOnly = false) {
   const terms = search ? searchTerms(search) : null;
   if (!terms) return null;
   params.searchPrefix = likePrefix(terms.referencePrefix);
-  const fullText = fullTextQuery(terms);
+  const fullText = claimOnly ? null : fullTextQuery(terms);
   if (!fullText) return 'SELECT id FROM jobs WHERE claim_reference LIKE :searchPrefix';
   params.searchWords = fullText;
   return `SELECT id FROM jobs WHERE claim_reference LIKE :searchPrefix
@@ -34,7 +36,7 @@ function searchSource(search: string | undefined, params: Record<string, unknown
 }
 
 function fromAndWhere(q: Omit<JobPageQuery, 'orderBy' | 'limit' | 'offset'>, params: Record<string, unknown>, joins = '') {
-  const matches = searchSource(q.search, params);
+  const matches = searchSource(q.search, params, q.claimOnly);
   const from = matches ? `(${matches}) s JOIN jobs j ON j.id = s.id` : `jobs j${q.index ? ` FORCE INDEX (${q.index})` : ''}`;
   const where = q.conditions.length ? `WHERE ${q.conditions.join(' AND ')}` : '';
   return `FROM ${from} ${joins} ${where}`;
@@ -43,6 +45,17 @@ function fromAndWhere(q: Omit<JobPageQuery, 'orderBy' | 'limit' | 'offset'>, par
 // The page in one statement: the jobs' columns and whatever the joins add (the technician's
 // and the claimant's names), read along the named index. `select` names columns of j and
 // the joined tables; the default is the ids alone.
+// A text that looks like a claim reference and starts one is searched as a claim reference
+// only (one indexed prefix read decides); anything else also searches the words.
+export async function resolveSearch<T extends { search?: string; claimOnly?: boolean }>(q: T): Promise<T> {
+  if (!q.search || !looksLikeClaimReference(q.search)) return q;
+  const hit = await sequelize.query('SELECT 1 FROM jobs WHERE claim_reference LIKE ? LIMIT 1', {
+    replacements: [likePrefix(q.search.trim())],
+    type: QueryTypes.SELECT,
+  });
+  return hit.length ? { ...q, claimOnly: true } : q;
+}
+
 export function pageSql(q: JobPageQuery, select = 'j.id', joins = '') {
   const params = { ...q.params, limit: q.limit, offset: q.offset };
   return { sql: `SELECT ${select} ${fromAndWhere(q, params, joins)} ORDER BY ${q.orderBy.join(', ')} LIMIT :limit OFFSET :offset`, params };
@@ -55,9 +68,9 @@ export async function pageOfJobs<T extends object>(q: JobPageQuery, select: stri
 
 // How many jobs match, counted from an index. With a cap, counting stops there: a list of
 // every job a firm ever had needs "more than 10,000", not an exact figure at each page.
-export async function countJobs(q: Pick<JobPageQuery, 'conditions' | 'params' | 'search'>, cap?: number): Promise<number> {
+export async function countJobs(q: Pick<JobPageQuery, 'conditions' | 'params' | 'search' | 'claimOnly'>, cap?: number): Promise<number> {
   const params: Record<string, unknown> = { ...q.params, cap };
-  const from = fromAndWhere({ conditions: q.conditions, params: q.params, search: q.search }, params);
+  const from = fromAndWhere({ conditions: q.conditions, params: q.params, search: q.search, claimOnly: q.claimOnly }, params);
   const sql = cap ? `SELECT COUNT(*) AS n FROM (SELECT 1 ${from} LIMIT :cap) capped` : `SELECT COUNT(*) AS n ${from}`;
   const [row] = await sequelize.query<{ n: number }>(sql, { replacements: params, type: QueryTypes.SELECT });
   return Number(row.n);

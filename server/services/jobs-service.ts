@@ -18,7 +18,7 @@ import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
-import { countJobs, isoTime, type JobPageQuery, pageOfJobs, stateCounts } from './job-page-query';
+import { countJobs, isoTime, type JobPageQuery, pageOfJobs, resolveSearch, stateCounts } from './job-page-query';
 
 type Actor = Express.User;
 
@@ -129,7 +129,7 @@ const summaryFrom = (r: JobSqlRow): JobSummary => ({
 });
 
 export async function listJobs(actor: Actor, query: JobListQuery): Promise<JobPage> {
-  const pageQuery = jobListPageQuery(actor, query);
+  const pageQuery = await resolveSearch(jobListPageQuery(actor, query));
   // Without a technician or a search the total is the kept count of the states shown (exact);
   // otherwise it is counted from the index, up to a cap.
   const byState = actor.role !== 'technician' && !query.technicianId && !query.q;

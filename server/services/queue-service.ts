@@ -1,7 +1,7 @@
 import type { JobStatus } from '../../shared/jobs';
 import { QUEUE_STATUSES, type QueueFilters, type QueuePage, type QueueRow, type QueueSort } from '../../shared/review';
 import type { Job, User } from '../models';
-import { countJobs, isoTime, type JobPageQuery, pageOfJobs, stateCounts } from './job-page-query';
+import { countJobs, isoTime, type JobPageQuery, pageOfJobs, resolveSearch, stateCounts } from './job-page-query';
 
 type Actor = Express.User;
 
@@ -156,7 +156,9 @@ function queueRowFrom(r: QueueSqlRow, now: Date): QueueRow {
 }
 
 export async function listQueue(actor: Actor, params: QueueParamsIn): Promise<QueuePage> {
-  const { page, wholeQueue } = queuePageQuery(actor, params);
+  const built = queuePageQuery(actor, params);
+  const { wholeQueue } = built;
+  const page = await resolveSearch(built.page);
   const [rows, counts] = await Promise.all([pageOfJobs<QueueSqlRow>(page, QUEUE_SELECT, QUEUE_JOINS), queueStateCounts()]);
   // The unfiltered queue's size is the sum of its states' counts: no second count needed.
   const total = wholeQueue ? DEFAULT_STATUSES.reduce((sum, s) => sum + (counts[s] ?? 0), 0) : await countJobs(page);
