@@ -12,21 +12,12 @@ import {
   STRUCTURE_LABELS,
 } from './capture-record';
 import type { ClaimContacts } from './contacts';
-import { LOSS_TYPE_LABELS, type LossType, PROPERTY_TYPE_LABELS, type PropertyType } from './jobs';
+import { type JobFields, LOSS_TYPE_LABELS, PROPERTY_TYPE_LABELS } from './jobs';
 import type { StationPoint } from './station-file';
 import { metresToFeet, squareMetresToSquareFeet } from './units';
 
 export type SummaryInput = {
-  job: {
-    claimReference: string;
-    street: string;
-    city: string;
-    postcode: string;
-    propertyType: PropertyType;
-    lossType: LossType;
-    lossDate: string;
-    siteVisitDate: string | null;
-  };
+  job: Pick<JobFields, 'claimReference' | 'street' | 'city' | 'postcode' | 'propertyType' | 'lossType' | 'lossDate' | 'siteVisitDate'>;
   contacts: Pick<ClaimContacts, 'clientName' | 'adjusterName'>;
   technicianName: string;
   record: CaptureRecord;

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
 
-import { HttpError } from '../errors';
+import { notFound } from '../errors';
 import { MariaDbRateLimitStore } from '../middleware/rate-limit-store';
 import { sharedPhoto, sharedSummary, sharedSummaryPdf } from '../services/shared-view-service';
 import { sendStoredFile } from './files';
@@ -25,15 +25,6 @@ shareRouter.use(
   }),
 );
 
-// A malformed token is simply not found: the answer is the same as for a wrong one.
-shareRouter.param('token', (_req, _res, next, token: unknown) =>
-  next(
-    typeof token === 'string' && /^[A-Za-z0-9_-]{43}$/.test(token)
-      ? undefined
-      : new HttpError(404, 'not_found', 'This link is not valid. Check that it was copied whole, or ask the sender for a new one.'),
-  ),
-);
-
 shareRouter.get('/:token', async (req, res) => {
   res.setHeader('Cache-Control', 'no-store');
   res.json(await sharedSummary(req.params.token as string, req.ip));
@@ -46,7 +37,7 @@ shareRouter.get('/:token/summary.pdf', async (req, res) => {
 
 shareRouter.get('/:token/photos/:fileId', async (req, res, next) => {
   const fileId = Number(req.params.fileId);
-  if (!Number.isInteger(fileId) || fileId < 1) return next(new HttpError(404, 'not_found', 'Photo was not found.'));
+  if (!Number.isInteger(fileId) || fileId < 1) return next(notFound('Photo'));
   const { file, stream } = await sharedPhoto(req.params.token as string, fileId);
   await sendStoredFile(res, file, stream);
 });
