@@ -1,5 +1,6 @@
 // The acceptance summary for the adjuster, as plain-language content: the PDF and the shared
 // page both render this, so they can never say different things.
+import { damagePlaceName } from './damage-places';
 import {
   type CaptureRecord,
   GAP_CAUSE_LABELS,
@@ -72,7 +73,6 @@ export function roomSize(room: CaptureRecord['rooms'][number], unit: CaptureReco
 
 export function deliverySummary(input: SummaryInput): DeliverySummary {
   const { job, record } = input;
-  const roomName = new Map(record.rooms.map((r) => [r.key, r.name]));
   const levelsInRecord = [...new Set([...record.levels.map((l) => l.level), ...record.rooms.map((r) => r.level)])];
   const models = record.models.map((m) => ({
     structure: m.structureNote ? `${STRUCTURE_LABELS[m.structure]} (${m.structureNote})` : STRUCTURE_LABELS[m.structure],
@@ -124,7 +124,7 @@ export function deliverySummary(input: SummaryInput): DeliverySummary {
     }),
     plans: input.plans,
     damage: record.damageAreas.map((d) => ({
-      room: roomName.get(d.roomKey) ?? 'Room not named',
+      room: damagePlaceName(record, d.roomKey),
       description: `${d.description} (${LOSS_TYPE_LABELS[d.lossType].toLowerCase()})`,
       stations: d.stationNumbers.length
         ? `Seen from station${d.stationNumbers.length > 1 ? 's' : ''} ${d.stationNumbers.join(', ')}`

@@ -7,7 +7,9 @@ import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 import type { StoredFile } from '@/shared/files';
+import { damagePlaces, EXTERIOR_PLACE } from '@/shared/damage-places';
 import { LOSS_TYPE_LABELS, LOSS_TYPES } from '@/shared/jobs';
+import { DAMAGE_FIELD_LABELS } from '@/shared/record-labels';
 
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
@@ -17,21 +19,26 @@ export function DamageSection({ photos, defaultLossType }: { photos: StoredFile[
   const { control, errors } = useRecordForm();
   const { fields, append, remove } = useFieldArray({ control, name: 'damageAreas', keyName: 'fieldId' });
   const rooms = useWatch({ control, name: 'rooms' });
-  const roomOptions = rooms.map((r, i) => ({ value: r.key, label: r.name.trim() || `Room ${i + 1}` }));
+  const detachedStructures = useWatch({ control, name: 'detachedStructures' });
+  const placeOptions = damagePlaces({ rooms, detachedStructures }).map((p) => ({ value: p.key, label: p.label }));
   return (
     <Section title="Damage areas" summary={fields.length ? `${fields.length} recorded` : 'None recorded'}>
       {fields.map((field, i) => (
         <View key={field.fieldId} style={styles.item} role="group" aria-label={`Damage area ${i + 1}`}>
-          {roomOptions.length ? (
-            <ChoiceInputField name={`damageAreas.${i}.roomKey`} label="Room" options={roomOptions} />
-          ) : (
-            <Text variant="muted">Add rooms first to place the damage.</Text>
-          )}
-          <TextInputField name={`damageAreas.${i}.description`} label="What the damage is" hint="e.g. Ceiling stain about 3 ft across" />
-          <ChoiceInputField name={`damageAreas.${i}.lossType`} label="Loss type" options={options(LOSS_TYPES, LOSS_TYPE_LABELS)} />
+          <ChoiceInputField name={`damageAreas.${i}.roomKey`} label={DAMAGE_FIELD_LABELS.roomKey} options={placeOptions} />
+          <TextInputField
+            name={`damageAreas.${i}.description`}
+            label={DAMAGE_FIELD_LABELS.description}
+            hint="e.g. Ceiling stain about 3 ft across"
+          />
+          <ChoiceInputField
+            name={`damageAreas.${i}.lossType`}
+            label={DAMAGE_FIELD_LABELS.lossType}
+            options={options(LOSS_TYPES, LOSS_TYPE_LABELS)}
+          />
           <TextInputField
             name={`damageAreas.${i}.stationNumbers`}
-            label="Stations that view it clearly"
+            label={DAMAGE_FIELD_LABELS.stationNumbers}
             hint="Numbers, separated by commas"
           />
           <Text variant="label">Photos of this damage</Text>
@@ -68,7 +75,7 @@ export function DamageSection({ photos, defaultLossType }: { photos: StoredFile[
         onPress={() =>
           append({
             key: newKey('d'),
-            roomKey: rooms[0]?.key ?? '',
+            roomKey: rooms[0]?.key ?? EXTERIOR_PLACE,
             description: '',
             lossType: defaultLossType,
             stationNumbers: '',

@@ -9,6 +9,7 @@ import { GAP_CAUSE_LABELS, GAP_CAUSES } from '@/shared/capture-record';
 import { ChoiceInputField, options, TextInputField, YesNoField } from './controlled';
 import { useRecordForm } from './form-context';
 import { newKey } from './form-values';
+import { GAP_FIELD_LABELS } from '@/shared/record-labels';
 
 export function GapsSection() {
   const { control } = useRecordForm();
@@ -17,9 +18,9 @@ export function GapsSection() {
     <Section title="Coverage gaps" summary={fields.length ? `${fields.length} noted` : 'None noted'}>
       {fields.map((field, i) => (
         <View key={field.fieldId} style={styles.item} role="group" aria-label={`Coverage gap ${i + 1}`}>
-          <TextInputField name={`gaps.${i}.location`} label="Where" hint="e.g. Sunroom, west windows" />
-          <ChoiceInputField name={`gaps.${i}.cause`} label="Cause" options={options(GAP_CAUSES, GAP_CAUSE_LABELS)} />
-          <YesNoField name={`gaps.${i}.resolved`} label="Resolved with extra stations later" />
+          <TextInputField name={`gaps.${i}.location`} label={GAP_FIELD_LABELS.location} hint="e.g. Sunroom, west windows" />
+          <ChoiceInputField name={`gaps.${i}.cause`} label={GAP_FIELD_LABELS.cause} options={options(GAP_CAUSES, GAP_CAUSE_LABELS)} />
+          <YesNoField name={`gaps.${i}.resolved`} label={GAP_FIELD_LABELS.resolved} />
           <TextInputField name={`gaps.${i}.note`} label="Note (optional)" />
           <Button label={`Remove gap ${i + 1}`} tone="secondary" onPress={() => remove(i)} />
         </View>

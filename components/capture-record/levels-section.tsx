@@ -8,6 +8,7 @@ import { LEVEL_KINDS, LEVEL_LABELS } from '@/shared/capture-record';
 
 import { TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
+import { levelStationsLabel } from '@/shared/record-labels';
 
 export function LevelsSection() {
   const { control } = useRecordForm();
@@ -23,11 +24,7 @@ export function LevelsSection() {
             render={({ field }) => <Checkbox label={LEVEL_LABELS[level]} checked={field.value} onChange={field.onChange} />}
           />
           {levels[level].captured ? (
-            <TextInputField
-              name={`levels.${level}.stations`}
-              label={`Stations on ${LEVEL_LABELS[level].toLowerCase()}`}
-              numeric="numeric"
-            />
+            <TextInputField name={`levels.${level}.stations`} label={levelStationsLabel(level)} numeric="numeric" />
           ) : null}
         </View>
       ))}

@@ -10,6 +10,7 @@ import { SPLIT_REASON_LABELS, SPLIT_REASONS, STRUCTURE_LABELS, STRUCTURES } from
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
 import { newKey } from './form-values';
+import { DETACHED_FIELD_LABELS, MODEL_FIELD_LABELS } from '@/shared/record-labels';
 
 export function ModelsSection() {
   const { control } = useRecordForm();
@@ -25,20 +26,20 @@ export function ModelsSection() {
           <Text variant="label">{`Model ${i + 1}`}</Text>
           <ChoiceInputField
             name={`models.${i}.structure`}
-            label="Structure in this model"
+            label={MODEL_FIELD_LABELS.structure}
             options={options(STRUCTURES, STRUCTURE_LABELS)}
           />
           {modelValues[i]?.structure !== 'main_dwelling' ? (
             <>
               <ChoiceInputField
                 name={`models.${i}.splitReason`}
-                label="Why it is a separate model"
+                label={MODEL_FIELD_LABELS.splitReason}
                 options={options(SPLIT_REASONS, SPLIT_REASON_LABELS)}
               />
               <TextInputField name={`models.${i}.splitNote`} label="Note on the split (optional)" />
             </>
           ) : null}
-          <TextInputField name={`models.${i}.platformReference`} label="Model reference on the capture platform" />
+          <TextInputField name={`models.${i}.platformReference`} label={MODEL_FIELD_LABELS.platformReference} />
           <Button label={`Remove model ${i + 1}`} tone="secondary" onPress={() => models.remove(i)} />
         </View>
       ))}
@@ -59,19 +60,19 @@ export function ModelsSection() {
       <Text variant="label">Detached structures on the property</Text>
       {structures.fields.map((field, i) => (
         <View key={field.fieldId} style={styles.item} role="group" aria-label={`Detached structure ${i + 1}`}>
-          <TextInputField name={`detachedStructures.${i}.name`} label="Structure name" hint="e.g. Garden shed" />
+          <TextInputField name={`detachedStructures.${i}.name`} label={DETACHED_FIELD_LABELS.name} hint="e.g. Garden shed" />
           <ChoiceInputField
             name={`detachedStructures.${i}.structure`}
-            label="Kind"
+            label={DETACHED_FIELD_LABELS.structure}
             options={options(
               STRUCTURES.filter((s) => s !== 'main_dwelling'),
               STRUCTURE_LABELS,
             )}
           />
           {modelOptions.length ? (
-            <ChoiceInputField name={`detachedStructures.${i}.modelKey`} label="Captured in" options={modelOptions} />
+            <ChoiceInputField name={`detachedStructures.${i}.modelKey`} label={DETACHED_FIELD_LABELS.modelKey} options={modelOptions} />
           ) : null}
-          <TextInputField name={`detachedStructures.${i}.noModelReason`} label="If not captured: why" />
+          <TextInputField name={`detachedStructures.${i}.noModelReason`} label={DETACHED_FIELD_LABELS.noModelReason} />
           <Button label={`Remove structure ${i + 1}`} tone="secondary" onPress={() => structures.remove(i)} />
         </View>
       ))}

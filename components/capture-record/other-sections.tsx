@@ -14,6 +14,7 @@ import type { LengthUnit } from '@/shared/units';
 
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
+import { SCALAR_FIELDS } from '@/shared/record-labels';
 
 export function CameraSection({ onUnitsChange }: { onUnitsChange: (unit: LengthUnit) => void }) {
   const { control } = useRecordForm();
@@ -21,9 +22,9 @@ export function CameraSection({ onUnitsChange }: { onUnitsChange: (unit: LengthU
   const cameraClass = useWatch({ control, name: 'cameraClass' });
   return (
     <Section title="Camera and units" summary={cameraClass ? CAMERA_CLASS_LABELS[cameraClass] : 'Camera class not chosen'}>
-      <ChoiceInputField name="cameraClass" label="Camera class" options={options(CAMERA_CLASSES, CAMERA_CLASS_LABELS)} />
+      <ChoiceInputField name="cameraClass" label={SCALAR_FIELDS.cameraClass.label} options={options(CAMERA_CLASSES, CAMERA_CLASS_LABELS)} />
       <ChoiceField<LengthUnit>
-        label="Units for sizes"
+        label={SCALAR_FIELDS.units.label}
         options={[
           { value: 'ft', label: 'Feet' },
           { value: 'm', label: 'Metres' },
@@ -33,7 +34,7 @@ export function CameraSection({ onUnitsChange }: { onUnitsChange: (unit: LengthU
       />
       <ChoiceInputField
         name="glazingFlagged"
-        label="Windows and glass doors (glazing) flagged"
+        label={SCALAR_FIELDS.glazingFlagged.label}
         options={options(GLAZING_FLAGGED, { yes: 'Yes', no: 'No', partly: 'Partly' })}
       />
     </Section>
@@ -134,7 +135,7 @@ export function SafetySection() {
 export function NotesSection() {
   return (
     <Section title="Notes" summary="Anything the reviewer should know" initiallyOpen={false}>
-      <TextInputField name="notes" label="Notes for the reviewer" multiline />
+      <TextInputField name="notes" label={SCALAR_FIELDS.notes.label} multiline />
     </Section>
   );
 }

@@ -5,11 +5,12 @@ import { Button } from '@/components/ui/button';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
-import { LEVEL_KINDS, LEVEL_LABELS, REFLECTIVE_KINDS, REFLECTIVE_LABELS } from '@/shared/capture-record';
+import { LEVEL_KINDS, LEVEL_LABELS, REFLECTIVE_KINDS } from '@/shared/capture-record';
 
 import { ChoiceInputField, options, TextInputField, YesNoField } from './controlled';
 import { useRecordForm } from './form-context';
 import { emptyRoom } from './form-values';
+import { reflectiveFlaggedLabel, reflectiveFoundLabel, ROOM_FIELD_LABELS } from '@/shared/record-labels';
 
 export function RoomsSection() {
   const { control, unitLabel } = useRecordForm();
@@ -22,8 +23,8 @@ export function RoomsSection() {
         return (
           <View key={field.fieldId} style={styles.room} role="group" aria-label={name}>
             <Text variant="label">{name}</Text>
-            <TextInputField name={`rooms.${i}.name`} label="Room name" />
-            <ChoiceInputField name={`rooms.${i}.level`} label="Level" options={options(LEVEL_KINDS, LEVEL_LABELS)} />
+            <TextInputField name={`rooms.${i}.name`} label={ROOM_FIELD_LABELS.name} />
+            <ChoiceInputField name={`rooms.${i}.level`} label={ROOM_FIELD_LABELS.level} options={options(LEVEL_KINDS, LEVEL_LABELS)} />
             <View style={styles.row}>
               <View style={styles.cell}>
                 <TextInputField name={`rooms.${i}.length`} label={`Length (${unitLabel})`} numeric="decimal" />
@@ -35,24 +36,16 @@ export function RoomsSection() {
                 <TextInputField name={`rooms.${i}.area`} label={`or area (${unitLabel}²)`} hint="If not a rectangle" numeric="decimal" />
               </View>
             </View>
-            <TextInputField name={`rooms.${i}.stations`} label="Stations in this room" numeric="numeric" />
-            <YesNoField name={`rooms.${i}.doorwayStation`} label="Station in the doorway (sees both rooms)" />
+            <TextInputField name={`rooms.${i}.stations`} label={ROOM_FIELD_LABELS.stations} numeric="numeric" />
+            <YesNoField name={`rooms.${i}.doorwayStation`} label={ROOM_FIELD_LABELS.doorwayStation} />
             <Text variant="label">Reflective surfaces: found / flagged in the capture</Text>
             {REFLECTIVE_KINDS.map((kind) => (
               <View key={kind} style={styles.row}>
                 <View style={styles.cell}>
-                  <TextInputField
-                    name={`rooms.${i}.reflective.${kind}.found`}
-                    label={`${REFLECTIVE_LABELS[kind]} found`}
-                    numeric="numeric"
-                  />
+                  <TextInputField name={`rooms.${i}.reflective.${kind}.found`} label={reflectiveFoundLabel(kind)} numeric="numeric" />
                 </View>
                 <View style={styles.cell}>
-                  <TextInputField
-                    name={`rooms.${i}.reflective.${kind}.flagged`}
-                    label={`${REFLECTIVE_LABELS[kind]} flagged`}
-                    numeric="numeric"
-                  />
+                  <TextInputField name={`rooms.${i}.reflective.${kind}.flagged`} label={reflectiveFlaggedLabel(kind)} numeric="numeric" />
                 </View>
               </View>
             ))}

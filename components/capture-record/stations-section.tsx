@@ -5,6 +5,7 @@ import { Text } from '@/components/ui/text';
 
 import { TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
+import { SCALAR_FIELDS } from '@/shared/record-labels';
 
 export function StationsSection() {
   const { control } = useRecordForm();
@@ -14,10 +15,10 @@ export function StationsSection() {
   const sum = inRooms + (Number.parseInt(exterior, 10) || 0);
   return (
     <Section title="Station count" summary={`Rooms ${inRooms} + exterior ${Number.parseInt(exterior, 10) || 0} = ${sum}`}>
-      <TextInputField name="exteriorStations" label="Exterior stations" numeric="numeric" />
+      <TextInputField name="exteriorStations" label={SCALAR_FIELDS.exteriorStations.label} numeric="numeric" />
       <TextInputField
         name="totalStations"
-        label="Total stations in the capture"
+        label={SCALAR_FIELDS.totalStations.label}
         hint="Must equal the stations in rooms plus exterior"
         numeric="numeric"
       />

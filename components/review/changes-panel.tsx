@@ -3,12 +3,24 @@ import { StyleSheet, View } from 'react-native';
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import type { StoredFile } from '@/shared/files';
 import { REWORK_RESPONSE_LABELS, type Workspace } from '@/shared/review';
+import { groupChangesBySection } from '@/shared/revision-diff';
 
 const KIND_WORD = { added: 'Added', removed: 'Removed', changed: 'Changed' } as const;
 
 // For a resubmission: the technician's answers and what changed since the reviewed revision.
-export function ChangesPanel({ previous, currentRevision }: { previous: NonNullable<Workspace['previous']>; currentRevision: number }) {
+export function ChangesPanel({
+  previous,
+  currentRevision,
+  files,
+}: {
+  previous: NonNullable<Workspace['previous']>;
+  currentRevision: number;
+  files: Pick<StoredFile, 'id' | 'name'>[];
+}) {
+  const fileName = (id: number) => files.find((f) => f.id === id)?.name ?? 'a file no longer attached';
+  const groups = groupChangesBySection(previous.changes);
   return (
     <View style={styles.card} role="region" aria-label="Changes since the last review">
       <Text variant="heading" role="heading" aria-level={2}>{`Resubmission: revision ${previous.revision} → ${currentRevision}`}</Text>
@@ -30,16 +42,23 @@ export function ChangesPanel({ previous, currentRevision }: { previous: NonNulla
           <Text variant="small">{`Asked: ${item.instruction}`}</Text>
           {item.responseNote ? <Text variant="small">{`Answer: ${item.responseNote}`}</Text> : null}
           {item.responseFileIds.length ? (
-            <Text variant="small">{`Files attached to the answer: ${item.responseFileIds.map((id) => `#${id}`).join(', ')} (see Files)`}</Text>
+            <Text variant="small">{`Files attached to the answer: ${item.responseFileIds.map(fileName).join(', ')} (see Files)`}</Text>
           ) : null}
         </View>
       ))}
       <Text variant="label">{`What changed (${previous.changes.length})`}</Text>
       {previous.changes.length === 0 ? <Text variant="muted">Nothing in the record changed.</Text> : null}
-      {previous.changes.map((change) => (
-        <Text key={`${change.path}-${change.kind}`} variant="small">
-          {`${KIND_WORD[change.kind]} ${change.path}: ${change.before} → ${change.after}`}
-        </Text>
+      {groups.map((group) => (
+        <View key={group.section} style={styles.group} role="group" aria-label={`Changes in ${group.title}`}>
+          <Text style={{ fontFamily: fonts.semibold }}>{group.title}</Text>
+          {group.changes.map((change) => (
+            <Text key={`${change.path}-${change.kind}`} variant="small">
+              {change.kind === 'changed'
+                ? `${change.label}: was ${change.before}, now ${change.after}`
+                : `${KIND_WORD[change.kind]}: ${change.label} (${change.kind === 'added' ? change.after : change.before})`}
+            </Text>
+          ))}
+        </View>
       ))}
     </View>
   );
@@ -48,5 +67,6 @@ export function ChangesPanel({ previous, currentRevision }: { previous: NonNulla
 const styles = StyleSheet.create({
   card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.accent, borderRadius: 8, padding: space.lg, gap: space.sm },
   item: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, padding: space.sm, gap: 2 },
+  group: { gap: 2, paddingTop: space.xs },
   head: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center', gap: space.sm },
 });

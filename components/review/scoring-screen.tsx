@@ -46,7 +46,9 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
       <ClaimBar workspace={workspace} holdsClaim={holdsClaim} />
       <View style={[styles.columns, wide && styles.wideColumns]}>
         <View style={[{ gap: space.md }, wide ? { flex: 1 } : undefined]}>
-          {workspace.previous ? <ChangesPanel previous={workspace.previous} currentRevision={revision.number} /> : null}
+          {workspace.previous ? (
+            <ChangesPanel previous={workspace.previous} currentRevision={revision.number} files={revision.files} />
+          ) : null}
           <RevisionPanel revision={revision} />
           {revision.stationAnalysis ? (
             <Section title="Station layout" summary="Computed by Sightline from the station file">
