@@ -1,6 +1,5 @@
 // The acceptance summary for the adjuster, as plain-language content: the PDF and the shared
 // page both render this, so they can never say different things.
-import { damagePlaceName } from './damage-places';
 import {
   type CaptureRecord,
   GAP_CAUSE_LABELS,
@@ -13,6 +12,7 @@ import {
   STRUCTURE_LABELS,
 } from './capture-record';
 import type { ClaimContacts } from './contacts';
+import { damagePlaceName } from './damage-places';
 import { type JobFields, LOSS_TYPE_LABELS, PROPERTY_TYPE_LABELS } from './jobs';
 import type { StationPoint } from './station-file';
 import { metresToFeet, squareMetresToSquareFeet } from './units';

@@ -3,16 +3,16 @@
 // summary all take their wording from here, so a field is called the same thing everywhere.
 import {
   CAMERA_CLASS_LABELS,
+  type CaptureRecord,
   GAP_CAUSE_LABELS,
   HAZARD_LABELS,
   LEVEL_LABELS,
   REFLECTIVE_LABELS,
   SPLIT_REASON_LABELS,
   STRUCTURE_LABELS,
-  type CaptureRecord,
 } from './capture-record';
 import { LOSS_TYPE_LABELS } from './jobs';
-import { AREA_LABEL, fromMetres, fromSquareMetres, roundTo, type LengthUnit } from './units';
+import { AREA_LABEL, fromMetres, fromSquareMetres, type LengthUnit, roundTo } from './units';
 
 export const RECORD_SECTIONS = [
   'camera',

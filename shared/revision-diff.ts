@@ -1,7 +1,7 @@
 // What changed between two revisions of a capture record, field by field, in the form's own
 // words ("Kitchen · Stations in this room: 5 → 6"), so a reviewer reads only the difference.
 // Lists of rooms, models, gaps, … are matched by their item key, not their position.
-import { REFLECTIVE_KINDS, type CaptureRecord, type ReflectiveCount, type Room } from './capture-record';
+import { type CaptureRecord, REFLECTIVE_KINDS, type ReflectiveCount, type Room } from './capture-record';
 import { damagePlaceName } from './damage-places';
 import type { StoredFile } from './files';
 import {
@@ -15,6 +15,7 @@ import {
   levelStationsLabel,
   MODEL_FIELD_LABELS,
   plainText,
+  type RecordSection,
   reflectiveFlaggedLabel,
   reflectiveFoundLabel,
   ROOM_FIELD_LABELS,
@@ -22,7 +23,6 @@ import {
   SECTION_LABELS,
   VALUE_LABELS,
   yesNo,
-  type RecordSection,
 } from './record-labels';
 
 export type Change = {

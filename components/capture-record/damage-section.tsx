@@ -6,8 +6,8 @@ import { Checkbox } from '@/components/ui/checkbox';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
-import type { StoredFile } from '@/shared/files';
 import { damagePlaces, EXTERIOR_PLACE } from '@/shared/damage-places';
+import type { StoredFile } from '@/shared/files';
 import { LOSS_TYPE_LABELS, LOSS_TYPES } from '@/shared/jobs';
 import { DAMAGE_FIELD_LABELS } from '@/shared/record-labels';
 

@@ -5,11 +5,11 @@ import { Button } from '@/components/ui/button';
 import { Section } from '@/components/ui/section';
 import { colors, space } from '@/components/ui/theme';
 import { GAP_CAUSE_LABELS, GAP_CAUSES } from '@/shared/capture-record';
+import { GAP_FIELD_LABELS } from '@/shared/record-labels';
 
 import { ChoiceInputField, options, TextInputField, YesNoField } from './controlled';
 import { useRecordForm } from './form-context';
 import { newKey } from './form-values';
-import { GAP_FIELD_LABELS } from '@/shared/record-labels';
 
 export function GapsSection() {
   const { control } = useRecordForm();

@@ -5,10 +5,10 @@ import { Checkbox } from '@/components/ui/checkbox';
 import { Section } from '@/components/ui/section';
 import { space } from '@/components/ui/theme';
 import { LEVEL_KINDS, LEVEL_LABELS } from '@/shared/capture-record';
+import { levelStationsLabel } from '@/shared/record-labels';
 
 import { TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
-import { levelStationsLabel } from '@/shared/record-labels';
 
 export function LevelsSection() {
   const { control } = useRecordForm();

@@ -6,11 +6,11 @@ import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 import { SPLIT_REASON_LABELS, SPLIT_REASONS, STRUCTURE_LABELS, STRUCTURES } from '@/shared/capture-record';
+import { DETACHED_FIELD_LABELS, MODEL_FIELD_LABELS } from '@/shared/record-labels';
 
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
 import { newKey } from './form-values';
-import { DETACHED_FIELD_LABELS, MODEL_FIELD_LABELS } from '@/shared/record-labels';
 
 export function ModelsSection() {
   const { control } = useRecordForm();

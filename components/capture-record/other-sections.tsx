@@ -10,11 +10,11 @@ import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 import { CAMERA_CLASS_LABELS, CAMERA_CLASSES, GLAZING_FLAGGED, type Hazard, HAZARD_LABELS, HAZARDS } from '@/shared/capture-record';
+import { SCALAR_FIELDS } from '@/shared/record-labels';
 import type { LengthUnit } from '@/shared/units';
 
 import { ChoiceInputField, options, TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
-import { SCALAR_FIELDS } from '@/shared/record-labels';
 
 export function CameraSection({ onUnitsChange }: { onUnitsChange: (unit: LengthUnit) => void }) {
   const { control } = useRecordForm();

@@ -6,11 +6,11 @@ import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 import { LEVEL_KINDS, LEVEL_LABELS, REFLECTIVE_KINDS } from '@/shared/capture-record';
+import { reflectiveFlaggedLabel, reflectiveFoundLabel, ROOM_FIELD_LABELS } from '@/shared/record-labels';
 
 import { ChoiceInputField, options, TextInputField, YesNoField } from './controlled';
 import { useRecordForm } from './form-context';
 import { emptyRoom } from './form-values';
-import { reflectiveFlaggedLabel, reflectiveFoundLabel, ROOM_FIELD_LABELS } from '@/shared/record-labels';
 
 export function RoomsSection() {
   const { control, unitLabel } = useRecordForm();

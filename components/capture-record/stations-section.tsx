@@ -2,10 +2,10 @@ import { useWatch } from 'react-hook-form';
 
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
+import { SCALAR_FIELDS } from '@/shared/record-labels';
 
 import { TextInputField } from './controlled';
 import { useRecordForm } from './form-context';
-import { SCALAR_FIELDS } from '@/shared/record-labels';
 
 export function StationsSection() {
   const { control } = useRecordForm();
