@@ -326,25 +326,59 @@ export function demoJobs(now = new Date()): DemoJob[] {
 
     const priorityRoll = rand();
     const latest = revisions.at(-1)?.record;
-    jobs.push({
-      claimReference: `MRK-26-${String(1001 + i)}`,
-      street: `${10 + Math.floor(rand() * 190)} ${STREETS[i % STREETS.length]}`,
-      city: 'Maraskell',
-      postcode: `MK-${1000 + Math.floor(rand() * 9000)}`,
-      propertyType: PROPERTY_TYPES[Math.floor(rand() * PROPERTY_TYPES.length)],
-      lossType: LOSS_TYPES[Math.floor(rand() * LOSS_TYPES.length)],
-      lossDate: isoDate(loss),
-      siteVisitDate: status === 'draft' && rand() < 0.4 ? null : isoDate(siteVisit),
-      dueAt,
-      priority: priorityRoll < 0.75 ? 'normal' : priorityRoll < 0.93 ? 'urgent' : 'catastrophe',
-      status,
-      technicianIndex,
-      revisions,
-      reviews,
-      pausedAt,
-      pausedMs,
-      draft: latest ?? { ...first, processing: { confirmed: false, confirmedAt: null } },
-    });
+    jobs.push(
+      keepInPast(now, {
+        claimReference: `MRK-26-${String(1001 + i)}`,
+        street: `${10 + Math.floor(rand() * 190)} ${STREETS[i % STREETS.length]}`,
+        city: 'Maraskell',
+        postcode: `MK-${1000 + Math.floor(rand() * 9000)}`,
+        propertyType: PROPERTY_TYPES[Math.floor(rand() * PROPERTY_TYPES.length)],
+        lossType: LOSS_TYPES[Math.floor(rand() * LOSS_TYPES.length)],
+        lossDate: isoDate(loss),
+        siteVisitDate: status === 'draft' && rand() < 0.4 ? null : isoDate(siteVisit),
+        dueAt,
+        priority: priorityRoll < 0.75 ? 'normal' : priorityRoll < 0.93 ? 'urgent' : 'catastrophe',
+        status,
+        technicianIndex,
+        revisions,
+        reviews,
+        pausedAt,
+        pausedMs,
+        draft: latest ?? { ...first, processing: { confirmed: false, confirmedAt: null } },
+      }),
+    );
   }
   return jobs;
+}
+
+// Nothing in the demo happens in the future ("submitted 1 minute ago" at midnight): a job
+// whose latest event would fall after `now` moves back, whole days at a time so its dates
+// stay whole, until that event is at least a few minutes old. Only the due date may lie ahead.
+const PAST_MARGIN_MS = 10 * 60_000;
+
+export function latestDemoEvent(job: DemoJob): number {
+  return Math.max(
+    new Date(`${job.lossDate}T00:00:00Z`).getTime(),
+    job.siteVisitDate ? new Date(`${job.siteVisitDate}T00:00:00Z`).getTime() : 0,
+    ...job.revisions.map((r) => r.submittedAt.getTime()),
+    ...job.reviews.flatMap((r) => [r.decidedAt.getTime(), r.claimedAt?.getTime() ?? 0]),
+    job.pausedAt?.getTime() ?? 0,
+  );
+}
+
+export function keepInPast(now: Date, job: DemoJob): DemoJob {
+  const over = latestDemoEvent(job) - (now.getTime() - PAST_MARGIN_MS);
+  if (over <= 0) return job;
+  const shift = Math.ceil(over / DAY) * DAY;
+  const back = (d: Date) => new Date(d.getTime() - shift);
+  const backDate = (s: string) => isoDate(back(new Date(`${s}T00:00:00Z`)));
+  return {
+    ...job,
+    lossDate: backDate(job.lossDate),
+    siteVisitDate: job.siteVisitDate ? backDate(job.siteVisitDate) : null,
+    dueAt: back(job.dueAt),
+    revisions: job.revisions.map((r) => ({ ...r, submittedAt: back(r.submittedAt) })),
+    reviews: job.reviews.map((r) => ({ ...r, decidedAt: back(r.decidedAt), claimedAt: r.claimedAt ? back(r.claimedAt) : null })),
+    pausedAt: job.pausedAt ? back(job.pausedAt) : null,
+  };
 }
