@@ -10,6 +10,10 @@ import type { ParetoBar } from '@/shared/trends';
 
 import { ChartReader, READ_HINT } from './chart-reader';
 
+// A slanted label has the bottom margin's diagonal to itself: about 18 characters at 10 px.
+const LABEL_CHARS = 18;
+const shortLabel = (label: string, max: number) => (label.length > max ? `${label.slice(0, max - 1)}…` : label);
+
 // Most frequent shortfalls: bars by count, and the cumulative share as a line.
 export function ParetoChart({ bars, title, maxWidth }: { bars: ParetoBar[]; title: string; maxWidth?: number }) {
   const { width: screen } = useWindowDimensions();
@@ -17,8 +21,8 @@ export function ParetoChart({ bars, title, maxWidth }: { bars: ParetoBar[]; titl
   const [picked, setPicked] = useState<number | null>(null);
   const top = bars.slice(0, 8);
   if (top.length === 0) return <Text variant="muted">{`No ${title.toLowerCase()} in this period.`}</Text>;
-  const height = 240;
-  const margin = { top: 16, right: 40, bottom: 70, left: 40 };
+  const height = 250;
+  const margin = { top: 16, right: 40, bottom: 80, left: 56 };
   const x = scaleBand<number>()
     .domain(top.map((_, i) => i))
     .range([margin.left, width - margin.right])
@@ -60,15 +64,17 @@ export function ParetoChart({ bars, title, maxWidth }: { bars: ParetoBar[]; titl
               >
                 {String(b.count)}
               </SvgText>
+              {/* Slanted so neighbours never overlap; the full name shows when the bar is picked. */}
               <SvgText
                 x={x(i)! + x.bandwidth() / 2}
-                y={height - margin.bottom + 14}
+                y={height - margin.bottom + 12}
                 fontSize={10}
-                textAnchor="middle"
+                textAnchor="end"
                 fill={colors.muted}
                 fontFamily={fonts.regular}
+                transform={`rotate(-35 ${x(i)! + x.bandwidth() / 2} ${height - margin.bottom + 12})`}
               >
-                {b.label.length > 14 ? `${b.label.slice(0, 13)}…` : b.label}
+                {shortLabel(b.label, LABEL_CHARS)}
               </SvgText>
             </G>
           ))}
