@@ -2,7 +2,9 @@
 // The server's requireRole is what enforces access; this only shapes the menus.
 import type { Role } from './roles';
 
-export type NavItem = { href: string; label: string; roles: Role[] };
+// `openToAll`: shown to every role where the server opens it to everyone (the local mailbox in
+// development); otherwise only to `roles`.
+export type NavItem = { href: string; label: string; roles: Role[]; openToAll?: 'mailbox' };
 
 export const NAV_ITEMS: NavItem[] = [
   { href: '/jobs', label: 'My jobs', roles: ['technician'] },
@@ -12,7 +14,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/trends', label: 'Trends', roles: ['manager'] },
   { href: '/rubric', label: 'Rubric', roles: ['manager'] },
   { href: '/admin/users', label: 'Users', roles: ['admin'] },
-  { href: '/mailbox', label: 'Mailbox', roles: ['admin'] },
+  { href: '/mailbox', label: 'Mailbox', roles: ['admin'], openToAll: 'mailbox' },
 ];
 
 const HOME: Record<Role, string> = {
@@ -26,10 +28,12 @@ export function homeFor(role: Role): string {
   return HOME[role];
 }
 
-export function navFor(role: Role): NavItem[] {
-  return NAV_ITEMS.filter((item) => item.roles.includes(role));
+export type NavOptions = { mailboxOpen?: boolean };
+
+export function navFor(role: Role, options: NavOptions = {}): NavItem[] {
+  return NAV_ITEMS.filter((item) => item.roles.includes(role) || (item.openToAll === 'mailbox' && options.mailboxOpen));
 }
 
-export function canOpen(role: Role, href: string): boolean {
-  return navFor(role).some((item) => href === item.href || href.startsWith(`${item.href}/`));
+export function canOpen(role: Role, href: string, options: NavOptions = {}): boolean {
+  return navFor(role, options).some((item) => href === item.href || href.startsWith(`${item.href}/`));
 }

@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import { body } from 'express-validator';
 
+import { config } from '../config';
 import { requireAuth } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { changePassword } from '../services/account-service';
@@ -8,7 +9,8 @@ import { changePassword } from '../services/account-service';
 export const meRouter = Router();
 
 meRouter.get('/', requireAuth, (req, res) => {
-  res.json({ user: req.user });
+  // mailboxOpen: whether this person may read the local fake mailbox (shapes the menu only).
+  res.json({ user: { ...req.user, mailboxOpen: req.user!.role === 'admin' || config.mailboxOpenToAll } });
 });
 
 // Changing one's own password needs the current one; every other session of the account ends.

@@ -17,4 +17,9 @@ describe('role navigation', () => {
     expect(ROLES.filter((role) => canOpen(role, '/admin/users'))).toEqual(['admin']);
     expect(navFor('technician').map((i) => i.label)).toEqual(['My jobs', 'My quality']);
   });
+
+  it('shows the Mailbox to admins, and to every role only where the server opens it to all', () => {
+    expect(ROLES.filter((role) => navFor(role).some((i) => i.href === '/mailbox'))).toEqual(['admin']);
+    expect(ROLES.filter((role) => navFor(role, { mailboxOpen: true }).some((i) => i.href === '/mailbox'))).toEqual([...ROLES]);
+  });
 });
