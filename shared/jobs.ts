@@ -109,6 +109,8 @@ export type JobSummary = JobFields & {
   status: JobStatus;
   technician: { id: number; name: string };
   revisionCount: number;
+  // While rework is asked for: when the technician's answers are due.
+  reworkDueAt: string | null;
 };
 
 // "Overdue by 2 days" / "Due in 5 hours": time left in words, never colour alone.
@@ -118,6 +120,14 @@ export function describeDue(dueAt: string | Date, now: Date, finished: boolean):
   if (finished) return { overdue: false, text: 'Delivered' };
   const span = humanSpan(Math.abs(diff));
   return diff < 0 ? { overdue: true, text: `Overdue by ${span}` } : { overdue: false, text: `Due in ${span}` };
+}
+
+// While rework is asked for, the delivery clock is paused and the technician's deadline is
+// the one that matters: "Rework due in 20 hours" / "Rework overdue by 3 hours".
+export function describeReworkDue(reworkDueAt: string | Date, now: Date): { overdue: boolean; text: string } {
+  const diff = new Date(reworkDueAt).getTime() - now.getTime();
+  const span = humanSpan(Math.abs(diff));
+  return diff < 0 ? { overdue: true, text: `Rework overdue by ${span}` } : { overdue: false, text: `Rework due in ${span}` };
 }
 
 export function humanSpan(ms: number): string {

@@ -3,7 +3,7 @@ import { col, fn, Op } from 'sequelize';
 import type { JobDetail } from '../../shared/api-types';
 import { emptyCaptureRecord } from '../../shared/capture-record';
 import { type ClaimContacts, CONTACT_FIELDS } from '../../shared/contacts';
-import { effectiveDueAt } from '../../shared/due-clock';
+import { effectiveDueAt, reworkDueAt } from '../../shared/due-clock';
 import {
   JOB_SORT_DEFAULT_DIR,
   type JobInput,
@@ -13,6 +13,7 @@ import {
   type JobSummary,
   pickJobInput,
 } from '../../shared/jobs';
+import { config } from '../config';
 import { inTransaction } from '../db';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
@@ -21,6 +22,10 @@ import { findJobFor } from './job-access';
 import { countJobs, isoTime, type JobPageQuery, pageOfJobs, resolveSearch, stateCounts } from './job-page-query';
 
 type Actor = Express.User;
+
+function reworkDueFor(status: JobSummary['status'], pausedAt: Date | string | null) {
+  return status === 'rework_requested' && pausedAt ? reworkDueAt(new Date(pausedAt), config.reworkHours).toISOString() : null;
+}
 
 function toSummary(job: Job, revisionCount: number): JobSummary {
   return {
@@ -38,6 +43,7 @@ function toSummary(job: Job, revisionCount: number): JobSummary {
     status: job.status,
     technician: { id: job.technician!.id, name: job.technician!.name },
     revisionCount,
+    reworkDueAt: reworkDueFor(job.status, job.pausedAt),
   };
 }
 
@@ -90,7 +96,7 @@ export function jobListPageQuery(actor: Actor, query: JobListQuery): JobPageQuer
 
 export const JOB_SELECT = `j.id, j.claim_reference, j.street, j.city, j.postcode, j.property_type, j.loss_type,
   DATE_FORMAT(j.loss_date, '%Y-%m-%d') AS loss_date, DATE_FORMAT(j.site_visit_date, '%Y-%m-%d') AS site_visit_date,
-  j.due_at, j.priority, j.status, t.id AS technician_id, t.name AS technician_name,
+  j.due_at, j.paused_at, j.priority, j.status, t.id AS technician_id, t.name AS technician_name,
   (SELECT COUNT(*) FROM capture_revisions r WHERE r.job_id = j.id) AS revision_count`;
 export const JOB_JOINS = 'JOIN users t ON t.id = j.technician_id';
 type JobSqlRow = {
@@ -104,6 +110,7 @@ type JobSqlRow = {
   loss_date: string;
   site_visit_date: string | null;
   due_at: Date;
+  paused_at: Date | null;
   priority: JobSummary['priority'];
   status: JobSummary['status'];
   technician_id: number;
@@ -126,6 +133,7 @@ const summaryFrom = (r: JobSqlRow): JobSummary => ({
   status: r.status,
   technician: { id: Number(r.technician_id), name: r.technician_name },
   revisionCount: Number(r.revision_count),
+  reworkDueAt: reworkDueFor(r.status, r.paused_at),
 });
 
 export async function listJobs(actor: Actor, query: JobListQuery): Promise<JobPage> {

@@ -1,6 +1,7 @@
 import { createApp } from '../../server/app';
+import { config } from '../../server/config';
 import { CaptureDraft, Job, sequelize } from '../../server/models';
-import { createJob, createUser, newJobBody } from '../helpers/factories';
+import { createJob, createUser, newJobBody, reworkRequested } from '../helpers/factories';
 import { countRows, resetSignInLimits, signedInAgent } from '../helpers/http';
 
 const app = createApp();
@@ -48,6 +49,22 @@ describe('GET /api/jobs', () => {
       const found = await agent.get(`/api/jobs?q=${job.claimReference}`);
       expect(found.body.jobs.map((j: { id: number }) => j.id)).toEqual([job.id]);
     }
+  });
+});
+
+describe('the rework deadline', () => {
+  it('is on the job page and in My jobs while rework is asked for, and nowhere else', async () => {
+    const { agent, user } = await signedInAgent(app, 'technician');
+    const { job } = await reworkRequested(user.id);
+    const other = await createJob({ technicianId: user.id });
+    const requestedAt = (await Job.findByPk(job.id))!.pausedAt!;
+    const expected = new Date(requestedAt.getTime() + config.reworkHours * 3_600_000).toISOString();
+    const detail = await agent.get(`/api/jobs/${job.id}`);
+    expect(detail.body.job.reworkDueAt).toBe(expected);
+    const list = await agent.get('/api/jobs');
+    const rows = new Map(list.body.jobs.map((r: { id: number; reworkDueAt: string | null }) => [r.id, r.reworkDueAt]));
+    expect(rows.get(job.id)).toBe(expected);
+    expect(rows.get(other.id)).toBeNull();
   });
 });
 
