@@ -10,13 +10,14 @@ import { navFor } from '@/shared/navigation';
 import { ROLE_LABELS } from '@/shared/roles';
 
 import { FailedEmailNotice } from './failed-email-notice';
+import { NotificationBell } from './notification-bell';
 
 export function AppShell({ user, children }: { user: SessionUser; children: React.ReactNode }) {
   const { width } = useWindowDimensions();
   const wide = width >= WIDE_BREAKPOINT;
   const pathname = usePathname();
   const signOut = useSignOutMutation();
-  const items = navFor(user.role);
+  const items = navFor(user.role, { mailboxOpen: user.mailboxOpen });
   const staff = user.role === 'manager' || user.role === 'admin';
   const isCurrent = (href: string) => pathname === href || pathname.startsWith(`${href}/`);
 
@@ -62,7 +63,10 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
     return (
       <View style={styles.wideRoot}>
         <View role="navigation" aria-label="Main" style={styles.sidebar}>
-          <Text style={styles.brand}>Sightline</Text>
+          <View style={styles.brandRow}>
+            <Text style={styles.brand}>Sightline</Text>
+            <NotificationBell current={isCurrent('/notifications')} />
+          </View>
           <View style={{ gap: space.xs }}>{navLinks}</View>
           <View style={{ flexGrow: 1 }} />
           {identity}
@@ -81,6 +85,7 @@ export function AppShell({ user, children }: { user: SessionUser; children: Reac
       <View style={styles.header} role="banner">
         <Text style={styles.brand}>Sightline</Text>
         <View style={styles.headerRight}>
+          <NotificationBell current={isCurrent('/notifications')} />
           {identity}
           {signOutButton}
         </View>
@@ -108,6 +113,7 @@ const styles = StyleSheet.create({
     paddingVertical: space.sm,
     backgroundColor: colors.ink,
   },
+  brandRow: { flexDirection: 'row', justifyContent: 'space-between', alignItems: 'center' },
   headerRight: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   main: { flex: 1 },
   brand: { fontFamily: fonts.bold, fontSize: 20, color: colors.paper, letterSpacing: 0.5 },

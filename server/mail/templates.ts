@@ -15,6 +15,9 @@ function layout(title: string, paragraphs: string[], items: string[] = [], link?
   ].join('');
 }
 
+// The reviewer's overall note, as a line of its own in the text and a paragraph in the HTML.
+const noteLine = (note: string | null) => (note ? `Note from the reviewer: ${note}` : '');
+
 type JobFacts = { claimReference: string; street: string; city: string; jobUrl: string };
 export type ReworkItemFacts = { title: string; instruction: string; stockReason: string | null };
 
@@ -24,6 +27,7 @@ export function reworkRequestEmail(
   items: ReworkItemFacts[],
   reworkDueAt: Date,
   reviewerName: string,
+  note: string | null = null,
 ): Email {
   const due = reworkDueAt.toUTCString();
   const subject = `Rework requested: ${job.claimReference}, revision ${revision}`;
@@ -33,6 +37,7 @@ export function reworkRequestEmail(
     '',
     ...lines,
     '',
+    ...(note ? [noteLine(note), ''] : []),
     `Please answer each item and resubmit by ${due}.`,
     `Open the job: ${job.jobUrl}`,
   ].join('\n');
@@ -40,6 +45,7 @@ export function reworkRequestEmail(
     `Rework requested for ${job.claimReference}`,
     [
       `${reviewerName} reviewed revision ${revision} for ${job.street}, ${job.city} and asks for rework on ${items.length} item(s).`,
+      ...(note ? [noteLine(note)] : []),
       `Please answer each item and resubmit by ${due}.`,
     ],
     items.map(
@@ -51,23 +57,23 @@ export function reworkRequestEmail(
   return { subject, text, html };
 }
 
-export function acceptedEmail(job: JobFacts, revision: number, score: number | null): Email {
+export function acceptedEmail(job: JobFacts, revision: number, score: number | null, note: string | null = null): Email {
   const subject = `Accepted: ${job.claimReference}, revision ${revision}`;
   const scoreText = score === null ? '' : ` with a score of ${score.toFixed(1)}`;
-  const text = `Revision ${revision} of the capture record for claim ${job.claimReference} (${job.street}, ${job.city}) was accepted${scoreText}. Thank you.\n\nOpen the job: ${job.jobUrl}`;
+  const text = `Revision ${revision} of the capture record for claim ${job.claimReference} (${job.street}, ${job.city}) was accepted${scoreText}. Thank you.\n\n${note ? `${noteLine(note)}\n\n` : ''}Open the job: ${job.jobUrl}`;
   return {
     subject,
     text,
     html: layout(
       `Accepted: ${job.claimReference}`,
-      [`Revision ${revision} for ${job.street}, ${job.city} was accepted${scoreText}. Thank you.`],
+      [`Revision ${revision} for ${job.street}, ${job.city} was accepted${scoreText}. Thank you.`, ...(note ? [noteLine(note)] : [])],
       [],
       { url: job.jobUrl, label: 'Open the job in Sightline' },
     ),
   };
 }
 
-export function recaptureEmail(job: JobFacts, revision: number, reasons: ReworkItemFacts[]): Email {
+export function recaptureEmail(job: JobFacts, revision: number, reasons: ReworkItemFacts[], note: string | null = null): Email {
   const subject = `Recapture required: ${job.claimReference}`;
   const lines = reasons.map((r) => `- ${r.title}: ${r.instruction}`);
   const text = [
@@ -75,6 +81,7 @@ export function recaptureEmail(job: JobFacts, revision: number, reasons: ReworkI
     '',
     ...lines,
     '',
+    ...(note ? [noteLine(note), ''] : []),
     `Open the job: ${job.jobUrl}`,
   ].join('\n');
   return {
@@ -82,7 +89,10 @@ export function recaptureEmail(job: JobFacts, revision: number, reasons: ReworkI
     text,
     html: layout(
       `Recapture required: ${job.claimReference}`,
-      [`Revision ${revision} for ${job.street}, ${job.city} cannot be fixed from the office: a new site visit is needed.`],
+      [
+        `Revision ${revision} for ${job.street}, ${job.city} cannot be fixed from the office: a new site visit is needed.`,
+        ...(note ? [noteLine(note)] : []),
+      ],
       reasons.map((r) => `<strong>${escape(r.title)}</strong><br>${escape(r.instruction)}`),
       { url: job.jobUrl, label: 'Open the job in Sightline' },
     ),
@@ -151,5 +161,17 @@ export function deliveryEmail(
     subject,
     text: `${greeting}\n\n${body}\n\n${shareUrl}\n`,
     html: layout(`Capture ready: ${job.claimReference}`, [greeting, body], [], { url: shareUrl, label: 'Open the capture summary' }),
+  };
+}
+
+// A notification sent by e-mail for a kind that has no e-mail of its own.
+export function notificationEmail(text: string, link: string): Email {
+  return {
+    subject: text,
+    text: `${text}\n\nOpen it in Sightline: ${link}\n\nYou get this e-mail because you chose it in Sightline's notification settings.`,
+    html: layout(text, ['You get this e-mail because you chose it in your notification settings.'], [], {
+      url: link,
+      label: 'Open it in Sightline',
+    }),
   };
 }

@@ -5,6 +5,7 @@ import { CaptureDraft } from './capture-draft';
 import { CaptureRevision } from './capture-revision';
 import { Delivery } from './delivery';
 import { Job } from './job';
+import { Notification, NotificationPref } from './notification';
 import { OutboxMessage } from './outbox-message';
 import { PasswordToken } from './password-token';
 import { Review } from './review';
@@ -35,6 +36,8 @@ OutboxMessage.initModel(sequelize);
 PasswordToken.initModel(sequelize);
 ShareLink.initModel(sequelize);
 Delivery.initModel(sequelize);
+Notification.initModel(sequelize);
+NotificationPref.initModel(sequelize);
 
 Job.belongsTo(User, { as: 'technician', foreignKey: 'technicianId' });
 Job.belongsTo(User, { as: 'createdBy', foreignKey: 'createdById' });
@@ -54,6 +57,8 @@ export {
   CaptureRevision,
   Delivery,
   Job,
+  Notification,
+  NotificationPref,
   OutboxMessage,
   PasswordToken,
   Review,

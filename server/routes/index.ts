@@ -6,6 +6,7 @@ import { healthRouter } from './health';
 import { jobsRouter } from './jobs';
 import { mailboxRouter } from './mailbox';
 import { meRouter } from './me';
+import { notificationsRouter } from './notifications';
 import { outboxRouter } from './outbox';
 import { passwordRouter } from './password';
 import { queueRouter } from './queue';
@@ -38,4 +39,5 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api/trends', router: trendsRouter },
   { prefix: '/api', router: deliveryRouter },
   { prefix: '/api/share', router: shareRouter },
+  { prefix: '/api/notifications', router: notificationsRouter },
 ];

@@ -6,6 +6,7 @@ import type { Decision } from '../../shared/review';
 import { config } from '../config';
 import { acceptedEmail, recaptureEmail, type ReworkItemFacts, reworkRequestEmail } from '../mail/templates';
 import { type Job, User } from '../models';
+import { emailWanted } from './notification-service';
 import { enqueueEmail } from './outbox-service';
 
 export function jobFacts(job: Job) {
@@ -13,15 +14,27 @@ export function jobFacts(job: Job) {
 }
 
 // Queues the e-mail that goes with a decision, inside the decision's own transaction.
+// Answers whether the technician's copy was queued (they may have turned it off).
 export async function queueDecisionEmail(
   transaction: Transaction,
   job: Job,
   decision: Decision,
-  context: { revision: number; score: number | null; items: ReworkItemFacts[]; reviewerName: string; decidedAt: Date },
+  context: {
+    revision: number;
+    score: number | null;
+    items: ReworkItemFacts[];
+    reviewerName: string;
+    decidedAt: Date;
+    note?: string | null;
+  },
 ) {
   const technician = await User.findByPk(job.technicianId, { transaction });
-  if (!technician) return;
+  if (!technician) return false;
   const facts = jobFacts(job);
+  // The technician's own choice in their notification settings (default: e-mailed).
+  const wants = (await emailWanted(transaction, [technician.id], decision === 'rework' ? 'rework_requested' : 'decision')).has(
+    technician.id,
+  );
   if (decision === 'rework') {
     const email = reworkRequestEmail(
       facts,
@@ -29,23 +42,27 @@ export async function queueDecisionEmail(
       context.items,
       reworkDueAt(context.decidedAt, config.reworkHours),
       context.reviewerName,
+      context.note ?? null,
     );
-    await enqueueEmail(transaction, { ...email, jobId: job.id, kind: 'rework_request', to: [technician.email] });
+    if (wants) await enqueueEmail(transaction, { ...email, jobId: job.id, kind: 'rework_request', to: [technician.email] });
   } else if (decision === 'accept') {
+    if (!wants) return false;
     await enqueueEmail(transaction, {
-      ...acceptedEmail(facts, context.revision, context.score),
+      ...acceptedEmail(facts, context.revision, context.score, context.note ?? null),
       jobId: job.id,
       kind: 'accepted',
       to: [technician.email],
     });
   } else {
     const managers = await User.findAll({ where: { role: 'manager', active: true }, transaction });
-    const to = [technician.email, ...managers.map((m) => m.email)];
+    const to = [...(wants ? [technician.email] : []), ...managers.map((m) => m.email)];
+    if (to.length === 0) return false;
     await enqueueEmail(transaction, {
-      ...recaptureEmail(facts, context.revision, context.items),
+      ...recaptureEmail(facts, context.revision, context.items, context.note ?? null),
       jobId: job.id,
       kind: 'recapture_required',
       to,
     });
   }
+  return wants;
 }

@@ -5,8 +5,9 @@ import { reworkDueAt, reworkOverdueCutoff } from '../../shared/due-clock';
 import { config } from '../config';
 import { inTransaction } from '../db';
 import { reworkReminderEmail } from '../mail/templates';
-import { Job, ReworkItem, User } from '../models';
+import { Job, Notification, ReworkItem, User } from '../models';
 import { jobFacts } from './decision-email-service';
+import { emailWanted, notify } from './notification-service';
 import { enqueueEmail } from './outbox-service';
 
 // One reminder per rework request once its answer time has passed. The dedupe key makes a
@@ -23,6 +24,10 @@ export async function queueOverdueReworkReminders(now = new Date()) {
         literal(
           "NOT EXISTS (SELECT 1 FROM outbox o WHERE o.job_id = `Job`.`id` AND o.kind = 'rework_reminder' AND o.created_at >= `Job`.`paused_at`)",
         ),
+        // A technician who turned reminder e-mails off still gets the notice, once.
+        literal(
+          "NOT EXISTS (SELECT 1 FROM notifications n WHERE n.job_id = `Job`.`id` AND n.kind = 'rework_reminder' AND n.created_at >= `Job`.`paused_at`)",
+        ),
       ],
     },
     limit: 100,
@@ -34,7 +39,16 @@ export async function queueOverdueReworkReminders(now = new Date()) {
     const technician = await User.findByPk(job.technicianId);
     if (!technician) continue;
     try {
-      await inTransaction(async (transaction) => {
+      const sent = await inTransaction(async (transaction) => {
+        // The job row's lock makes the check-then-write safe with several instances.
+        await Job.findByPk(job.id, { transaction, lock: transaction.LOCK.UPDATE });
+        const told = await Notification.count({
+          where: { jobId: job.id, kind: 'rework_reminder', createdAt: { [Op.gte]: job.pausedAt! } },
+          transaction,
+        });
+        if (told > 0) return false;
+        await notify(transaction, [technician], 'rework_reminder', job.id, `Rework overdue on ${job.claimReference}: ${open} item(s) open`);
+        if (!(await emailWanted(transaction, [technician.id], 'rework_reminder')).has(technician.id)) return true;
         await enqueueEmail(transaction, {
           ...reworkReminderEmail(jobFacts(job), reworkDueAt(job.pausedAt!, config.reworkHours), open),
           jobId: job.id,
@@ -42,8 +56,9 @@ export async function queueOverdueReworkReminders(now = new Date()) {
           to: [technician.email],
           dedupeKey: `rework-reminder:${job.id}:${job.pausedAt!.getTime()}`,
         });
+        return true;
       });
-      queued += 1;
+      if (sent) queued += 1;
     } catch (error) {
       if (!(error instanceof UniqueConstraintError)) throw error;
     }
