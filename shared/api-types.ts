@@ -13,7 +13,7 @@ export type ApiErrorBody = {
   error: { code: string; message: string; fields?: Record<string, string> };
 };
 
-export type SessionUser = { id: number; name: string; email: string; role: Role };
+export type SessionUser = { id: number; name: string; email: string; role: Role; mailboxOpen?: boolean };
 
 export type UserRow = SessionUser & { active: boolean; createdAt: string };
 
@@ -39,7 +39,15 @@ export type RevisionView = {
 };
 
 // POST /api/jobs/:id/reviews and /api/second-reviews/:id/reviews
-export type ReviewResult = { reviewId: number; score: number | null; passed: boolean; decision?: Decision; failedRules?: string[] };
+export type ReviewResult = {
+  reviewId: number;
+  score: number | null;
+  passed: boolean;
+  decision?: Decision;
+  failedRules?: string[];
+  // Whether the technician's e-mail was queued: they may have turned that e-mail off.
+  emailQueued?: boolean;
+};
 
 // GET /api/second-reviews
 export type OpenSecondReview = { id: number; jobId: number; claimReference: string; revision: number; createdAt: string };

@@ -57,7 +57,7 @@ export type QueuePage = {
 export type ScoreInput = { key: string; score: number | null; stockReason: string | null; comment: string };
 
 // A reviewer's unsaved work on one claim: scores and comments so far, and the chosen decision.
-export type ReviewDraftData = { scores: ScoreInput[]; decision: Decision | null };
+export type ReviewDraftData = { scores: ScoreInput[]; decision: Decision | null; note?: string };
 export type ReviewDraft = ReviewDraftData & { version: number; savedAt: string; revision: number };
 
 export type Workspace = {
@@ -112,3 +112,18 @@ export type ReworkItemView = {
 };
 
 export type TimelineEvent = { id: number; type: string; data: Record<string, unknown>; createdAt: string; actor: string | null };
+
+// What the reviewer is told once a decision is recorded: what happened and what was queued.
+export function decisionOutcomeText(
+  claimReference: string,
+  decision: Decision,
+  reworkItems: number,
+  blindSecond: boolean,
+  emailQueued = true,
+): string {
+  if (blindSecond) return `Blind second review saved for ${claimReference}. The job itself is unchanged.`;
+  const mail = emailQueued ? 'E-mail to the technician queued' : 'The technician is told in the app (they turned this e-mail off)';
+  if (decision === 'accept') return `Accepted ${claimReference}. ${mail}; the adjuster's summary is being built.`;
+  if (decision === 'rework') return `Rework requested for ${claimReference} (${reworkItems} item${reworkItems === 1 ? '' : 's'}). ${mail}.`;
+  return `Recapture required for ${claimReference}. ${mail}; the managers are e-mailed.`;
+}

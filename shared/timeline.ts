@@ -29,7 +29,7 @@ export function describeEvent(event: Pick<TimelineEvent, 'type' | 'data'>): stri
       return 'Claim moved to another reviewer';
     case 'reviewed':
       if (d.hidden) return `Reviewed (revision ${d.revision}); the outcome is hidden while a blind second review is open`;
-      return `Reviewed: ${DECISION_LABELS[d.decision as Decision] ?? d.decision}, score ${d.score ?? '–'} (rubric version ${d.rubricVersion}, revision ${d.revision})`;
+      return `Reviewed: ${DECISION_LABELS[d.decision as Decision] ?? d.decision}, score ${d.score ?? '–'} (rubric version ${d.rubricVersion}, revision ${d.revision})${d.note ? `. Note from the reviewer: ${String(d.note)}` : ''}`;
     case 'blind_second_review':
       return `Blind second review of revision ${d.revision}`;
     case 'email_queued':

@@ -38,3 +38,13 @@ export function useSecondClaimMutation() {
     onSettled: () => Promise.all([invalidateWorkspaces(queryClient), invalidateSecondReviews(queryClient)]),
   });
 }
+
+// Claims the next free record in the queue filter the reviewer came from (its query string).
+export function useClaimNextMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (queueFilter: string) =>
+      api.post<{ found: boolean; jobId: number | null }>(`/api/queue/claim-next${queueFilter ? `?${queueFilter}` : ''}`),
+    onSettled: () => invalidateReviewWork(queryClient),
+  });
+}

@@ -33,7 +33,7 @@ export function useWorkspaceQuery(jobId: number, second: number | null) {
 export function useReviewSubmitMutation(jobId: number, second: number | null) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (input: { decision: Decision; scores: ScoreInput[] }) =>
+    mutationFn: (input: { decision: Decision; scores: ScoreInput[]; note: string }) =>
       api.post<ReviewResult>(second ? `/api/second-reviews/${second}/reviews` : `/api/jobs/${jobId}/reviews`, input),
     onSuccess: () => Promise.all([invalidateReviewWork(queryClient), invalidateSecondReviews(queryClient)]),
   });

@@ -37,16 +37,18 @@ export function ClaimBar({ workspace, holdsClaim }: { workspace: Workspace; hold
       </View>
     );
   }
+  // A live claim by someone else: say who holds it rather than offer a claim that would fail.
+  const heldByOther = second === null && job.claimedBy !== null && job.claimedBy.id !== me?.id;
   return (
     <View style={styles.claimBar}>
       <Text>
         {second !== null
           ? 'Claim this blind review before scoring it.'
-          : job.claimedBy
-            ? `Claimed by ${job.claimedBy.name}.`
+          : heldByOther
+            ? `${job.claimedBy!.name} holds the claim on this record. It comes free when they release it or their claim lapses.`
             : 'Nobody has claimed this job yet.'}
       </Text>
-      {me?.role === 'reviewer' ? (
+      {me?.role === 'reviewer' && !heldByOther ? (
         <Button
           label="Claim to score"
           onPress={() => (second !== null ? secondClaim.mutate(second) : claim.mutate(job.id))}

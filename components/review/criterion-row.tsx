@@ -7,6 +7,7 @@ import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
 import { type Criterion, scaleMax } from '@/shared/rubric';
 import { isBelowFullMarks } from '@/shared/scoring';
+import { commentAfterStockReason } from '@/shared/stock-reasons';
 
 export type CriterionEntry = { score: number | null | undefined; stockReason: string | null; comment: string };
 
@@ -38,6 +39,8 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
     onFocus();
     onChange({ ...entry, score });
   };
+  const pickReason = (stockReason: string | null) =>
+    onChange({ ...entry, stockReason, comment: commentAfterStockReason(entry.comment, entry.stockReason, stockReason) });
   const ref = useRef<View>(null);
   // Focus and the highlighted criterion are one cursor: j/k move focus here, and Tab into the
   // row (onFocus below) makes it the current one, so a digit scores what has focus.
@@ -112,8 +115,8 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
                         role="radio"
                         aria-checked={selected}
                         accessibilityLabel={reason}
-                        onPress={() => onChange({ ...entry, stockReason: selected ? null : reason })}
-                        {...chooseOnKeys(() => onChange({ ...entry, stockReason: selected ? null : reason }))}
+                        onPress={() => pickReason(selected ? null : reason)}
+                        {...chooseOnKeys(() => pickReason(selected ? null : reason))}
                         style={[styles.reason, selected && styles.choiceSelected]}
                       >
                         <Text variant="small" style={selected ? { color: colors.surface } : undefined}>
@@ -126,7 +129,7 @@ export function CriterionRow({ criterion, applies, entry, current, carriedFrom, 
               ) : null}
               <TextInput
                 accessibilityLabel={`Comment for ${criterion.title}`}
-                placeholder="What falls short, and what the technician should do (required)"
+                placeholder="What falls short, and what the technician should do (required; a reason above fills it)"
                 placeholderTextColor={colors.muted}
                 value={entry.comment}
                 onChangeText={(comment) => onChange({ ...entry, comment })}

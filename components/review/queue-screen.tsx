@@ -56,7 +56,9 @@ export function QueueScreen() {
   const page = queue.data?.page ?? 1;
   const pages = queue.data ? pageCount(queue.data.total, queue.data.pageSize) : 1;
   const setParams = (changes: QueueParams) => router.setParams(changes as never);
-  const open = (row: QueueRow | undefined) => row && router.push(`/queue/${row.id}` as never);
+  // The review screen keeps the filter it came from, for "Claim next" after the decision.
+  const open = (row: QueueRow | undefined) =>
+    row && router.push(`/queue/${row.id}?from=${encodeURIComponent(queueSearch(params))}` as never);
   const claimAndOpen = async (row: QueueRow | undefined) => {
     if (!row || !isReviewer) return;
     await claim

@@ -1,4 +1,5 @@
 // The reviewer's workspace: the record on one side, the rubric on the other (stacked on phones).
+import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
@@ -12,6 +13,7 @@ import type { Workspace } from '@/shared/review';
 
 import { ChangesPanel } from './changes-panel';
 import { ClaimBar } from './claim-bar';
+import { DecisionDone } from './decision-done';
 import { RevisionPanel } from './revision-panel';
 import { RubricColumn } from './rubric-column';
 import { useScoreSheet } from './use-score-sheet';
@@ -26,6 +28,8 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
   const scores = useScoreSheet(workspace);
   const [current, setCurrent] = useState(0);
   const [help, setHelp] = useState(false);
+  const [decided, setDecided] = useState<string | null>(null);
+  const { from } = useLocalSearchParams<{ from?: string }>();
   const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
   const holdsClaim = second !== null ? workspace.secondClaimedByMe : job.claimedBy?.id === me?.id && me?.role === 'reviewer';
 
@@ -37,6 +41,8 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
     toggleHelp: () => setHelp((h) => !h),
     enabled: holdsClaim && !help,
   });
+
+  if (decided) return <DecisionDone message={decided} queueFilter={typeof from === 'string' ? from : ''} />;
 
   return (
     <View style={{ gap: space.md }}>
@@ -58,7 +64,14 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
         </View>
         <View style={wide ? { flex: 1 } : undefined}>
           {holdsClaim ? (
-            <RubricColumn workspace={workspace} scores={scores} current={current} onFocusCriterion={setCurrent} stickySummary={wide} />
+            <RubricColumn
+              workspace={workspace}
+              scores={scores}
+              current={current}
+              onFocusCriterion={setCurrent}
+              stickySummary={wide}
+              onDecided={setDecided}
+            />
           ) : null}
         </View>
       </View>

@@ -16,7 +16,11 @@ export type ReviewDraftStatus =
 const DEBOUNCE_MS = 800;
 const RETRY_MS = 8000;
 
-export function useReviewDraft(workspace: Workspace, snapshot: { scores: ScoreInput[]; decision: Decision | undefined }, enabled: boolean) {
+export function useReviewDraft(
+  workspace: Workspace,
+  snapshot: { scores: ScoreInput[]; decision: Decision | undefined; note: string },
+  enabled: boolean,
+) {
   const [status, setStatus] = useState<ReviewDraftStatus>({ kind: 'saved', savedAt: workspace.draft?.savedAt ?? null });
   const version = useRef(workspace.draft?.version ?? 0);
   const serial = JSON.stringify(snapshot);

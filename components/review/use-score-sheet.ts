@@ -30,6 +30,8 @@ export function useScoreSheet(workspace: Workspace) {
   const { rubric, applicable } = workspace;
   const [entries, setEntries] = useState<Record<string, CriterionEntry>>(() => startingEntries(workspace));
   const [decision, setDecision] = useState<Decision | undefined>(workspace.draft?.decision ?? undefined);
+  // The overall note to the technician, beside the per-criterion comments.
+  const [note, setNote] = useState(workspace.draft?.note ?? '');
   const sheet: ScoreSheet = useMemo(() => Object.fromEntries(rubric.criteria.map((c) => [c.key, entries[c.key].score])), [entries, rubric]);
   const evaluation = evaluate(rubric, sheet);
 
@@ -46,12 +48,13 @@ export function useScoreSheet(workspace: Workspace) {
       stockReason: entries[c.key].stockReason,
       comment: entries[c.key].comment,
     }));
-  const replace = (scores: ScoreInput[], chosen: Decision | null) => {
+  const replace = (scores: ScoreInput[], chosen: Decision | null, savedNote = '') => {
     setEntries(
       startingEntries({ ...workspace, draft: { scores, decision: chosen, version: 0, savedAt: '', revision: workspace.revision.number } }),
     );
     setDecision(chosen ?? undefined);
+    setNote(savedNote);
   };
 
-  return { entries, evaluation, setEntry, setScore, scoreInputs, decision, setDecision, replace };
+  return { entries, evaluation, setEntry, setScore, scoreInputs, decision, setDecision, note, setNote, replace };
 }

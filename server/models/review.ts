@@ -17,6 +17,7 @@ export class Review extends Model<InferAttributes<Review>, InferCreationAttribut
   declare claimedAt: Date | null;
   declare decidedAt: Date;
   declare dueAt: Date;
+  declare note: string | null;
 
   static initModel(sequelize: Sequelize) {
     Review.init(
@@ -33,6 +34,7 @@ export class Review extends Model<InferAttributes<Review>, InferCreationAttribut
         claimedAt: { type: DataTypes.DATE(3), allowNull: true },
         decidedAt: { type: DataTypes.DATE(3), allowNull: false },
         dueAt: { type: DataTypes.DATE(3), allowNull: false },
+        note: { type: DataTypes.TEXT, allowNull: true },
       },
       { sequelize, tableName: 'reviews', timestamps: false },
     );

@@ -45,14 +45,20 @@ reviewsRouter.put(
   validate(jobId, query('second', 'Must be a second-review id').optional().isInt({ min: 1 }).toInt(), ...reviewDraftRules),
   async (req, res) => {
     const second = req.query.second ? Number(req.query.second) : null;
-    const data = { decision: req.body.decision ?? null, scores: req.body.scores };
+    const data = { decision: req.body.decision ?? null, scores: req.body.scores, note: req.body.note ?? '' };
     res.json({ draft: await saveReviewDraft(req.user!, Number(req.params.id), second, data, req.baseVersion!) });
   },
 );
 
 // The server recomputes the score from the criterion scores; any total the client sends is ignored.
 reviewsRouter.post('/jobs/:id/reviews', requireRole('reviewer'), validate(jobId, ...reviewRules), async (req, res) => {
-  res.status(201).json(await submitReview(req.user!, Number(req.params.id), { decision: req.body.decision, scores: req.body.scores }));
+  res.status(201).json(
+    await submitReview(req.user!, Number(req.params.id), {
+      decision: req.body.decision,
+      scores: req.body.scores,
+      note: req.body.note ?? '',
+    }),
+  );
 });
 
 reviewsRouter.get('/second-reviews', requireRole('reviewer'), async (req, res) => {
@@ -73,9 +79,13 @@ reviewsRouter.post(
   requireRole('reviewer'),
   validate(param('id', 'Must be a second-review id').isInt({ min: 1 }).toInt(), ...reviewRules),
   async (req, res) => {
-    res
-      .status(201)
-      .json(await submitSecondReview(req.user!, Number(req.params.id), { decision: req.body.decision, scores: req.body.scores }));
+    res.status(201).json(
+      await submitSecondReview(req.user!, Number(req.params.id), {
+        decision: req.body.decision,
+        scores: req.body.scores,
+        note: req.body.note ?? '',
+      }),
+    );
   },
 );
 

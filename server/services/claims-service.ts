@@ -6,7 +6,8 @@ import { inTransaction } from '../db';
 import { conflict, HttpError, invalid, notFound } from '../errors';
 import { Job, User } from '../models';
 import { recordEvent } from './audit-service';
-import { activeClaim } from './queue-service';
+import { pageOfJobs, resolveSearch } from './job-page-query';
+import { activeClaim, queuePageQuery, type QueueParamsIn } from './queue-service';
 import { dropReviewDraft } from './review-draft-service';
 
 type Actor = Express.User;
@@ -40,6 +41,27 @@ export async function claimJob(actor: Actor, jobId: number) {
     await recordEvent(transaction, jobId, actor.id, 'claimed', { until: job.claimExpiresAt!.toISOString() });
     return { jobId, claimedBy: { id: actor.id, name: actor.name }, claimExpiresAt: job.claimExpiresAt!.toISOString() };
   });
+}
+
+// The next record in the reviewer's current queue filter and sort that nobody else holds,
+// claimed. Candidates are tried in queue order: a claim lost to a faster colleague moves on
+// to the following one, so two reviewers pressing "Claim next" at once get different records.
+export async function claimNext(actor: Actor, params: Omit<QueueParamsIn, 'page' | 'pageSize'>) {
+  const { page } = queuePageQuery(actor, { ...params, page: 1, pageSize: 20 });
+  page.conditions.push(
+    "j.status IN ('submitted', 'resubmitted', 'in_review')",
+    '(j.claimed_by_id IS NULL OR j.claim_expires_at < UTC_TIMESTAMP(3) OR j.claimed_by_id = :nextFor)',
+  );
+  page.params.nextFor = actor.id;
+  const candidates = await pageOfJobs<{ id: number }>(await resolveSearch(page), 'j.id', '');
+  for (const { id } of candidates) {
+    try {
+      return await claimJob(actor, Number(id));
+    } catch (error) {
+      if (!(error instanceof HttpError) || error.status !== 409) throw error;
+    }
+  }
+  return null;
 }
 
 export async function releaseClaim(actor: Actor, jobId: number) {

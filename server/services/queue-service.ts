@@ -89,7 +89,14 @@ function indexFor(filters: QueueFilters, sort: QueueSort, wholeQueue: boolean, s
   return undefined;
 }
 
-type QueueParamsIn = { page: number; pageSize: number; sort?: QueueSort; dir: 'asc' | 'desc'; filters: QueueFilters; search?: string };
+export type QueueParamsIn = {
+  page: number;
+  pageSize: number;
+  sort?: QueueSort;
+  dir: 'asc' | 'desc';
+  filters: QueueFilters;
+  search?: string;
+};
 
 export function queuePageQuery(actor: Actor, params: QueueParamsIn) {
   const { conditions, params: values, isDefault } = conditionsFor(actor, params.filters);

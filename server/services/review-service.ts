@@ -83,7 +83,7 @@ export function shouldSampleSecondReview(share: number, random: () => number = M
   return random() < share;
 }
 
-type ReviewInput = { decision: Decision; scores: ScoreInput[] };
+type ReviewInput = { decision: Decision; scores: ScoreInput[]; note?: string };
 
 // Scores, decision, job state, rework items, the timeline event and the calibration draw:
 // all in one transaction, so a review is either wholly recorded or not at all.
@@ -116,6 +116,7 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
         claimedAt: job.claimedAt,
         decidedAt: now,
         dueAt: job.effectiveDueAt,
+        note: input.note?.trim() || null,
       },
       { transaction },
     );
@@ -162,11 +163,13 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
       passed: evaluation.passed,
       rubricVersion: rubric.version,
       revision: revision.number,
+      ...(input.note?.trim() ? { note: input.note.trim() } : {}),
     });
-    await queueDecisionEmail(transaction, job, input.decision, {
+    const emailQueued = await queueDecisionEmail(transaction, job, input.decision, {
       revision: revision.number,
       score: evaluation.score,
       items: itemFacts,
+      note: input.note?.trim() || null,
       reviewerName: actor.name,
       decidedAt: now,
     });
@@ -196,6 +199,7 @@ export async function submitReview(actor: Actor, jobId: number, input: ReviewInp
       decision: input.decision,
       failedRules: evaluation.failedRules,
       sampledForSecondReview: sampled,
+      emailQueued,
     };
   });
 }
@@ -362,6 +366,7 @@ export async function submitSecondReview(actor: Actor, secondReviewId: number, i
         claimedAt: null,
         decidedAt: new Date(),
         dueAt: job!.effectiveDueAt,
+        note: input.note?.trim() || null,
       },
       { transaction },
     );

@@ -37,6 +37,7 @@ export const reviewRules = [
     .toInt(),
   body('scores.*.stockReason', 'Text of at most 120 characters').optional({ values: 'null' }).isString().isLength({ max: 120 }),
   body('scores.*.comment', 'Text of at most 2000 characters').isString().isLength({ max: 2000 }),
+  body('note', 'Text of at most 2000 characters').optional({ values: 'null' }).isString().isLength({ max: 2000 }),
 ];
 
 // A draft may be incomplete: any score may still be missing, and no decision chosen yet.
@@ -47,6 +48,7 @@ export const reviewDraftRules = [
   body('scores.*.score', 'A whole number from 0 to 4, or null').optional({ values: 'null' }).isInt({ min: 0, max: 4 }).toInt(),
   body('scores.*.stockReason', 'Text of at most 120 characters').optional({ values: 'null' }).isString().isLength({ max: 120 }),
   body('scores.*.comment', 'Text of at most 2000 characters').isString().isLength({ max: 2000 }),
+  body('note', 'Text of at most 2000 characters').optional({ values: 'null' }).isString().isLength({ max: 2000 }),
 ];
 
 export const reassignRules = [

@@ -202,7 +202,9 @@ describe('on a desktop (1440 × 900)', () => {
       const workspace = await second.evaluate(async (id) => (await fetch(`/api/jobs/${id}/workspace`)).json(), jobId);
       expect(workspace.draft).toBeNull();
       await second.goto(`${BASE_URL}/queue/${jobId}`);
-      await second.getByText(/Claimed by/).waitFor();
+      await second.getByText(/holds the claim on this record/).waitFor();
+      // Who holds it is said; no claim that would fail is offered.
+      await expect(second.getByRole('button', { name: 'Claim to score' }).count()).resolves.toBe(0);
       await expect(second.getByText('The attic and the garage are missing.').count()).resolves.toBe(0);
     } finally {
       await browser.close();

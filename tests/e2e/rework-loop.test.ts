@@ -63,7 +63,7 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
     .fill('Add a doorway station between the hall and the kitchen.');
   await reviewer.getByRole('radiogroup', { name: 'Decision' }).getByRole('radio', { name: 'Request rework' }).click();
   await reviewer.getByRole('button', { name: 'Record decision' }).click();
-  await reviewer.waitForURL(/\/queue(\?.*)?$/);
+  await reviewer.getByRole('region', { name: 'Decision recorded' }).waitFor();
 
   // Admin, desktop: the rework request is in the mailbox.
   const admin = await open(DESKTOP, 'alex.');
@@ -116,7 +116,7 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
   await screenshot(reviewer, 'resubmission-review-desktop');
   await reviewer.getByRole('radiogroup', { name: 'Decision' }).getByRole('radio', { name: 'Accept' }).click();
   await reviewer.getByRole('button', { name: 'Record decision' }).click();
-  await reviewer.waitForURL(/\/queue(\?.*)?$/);
+  await reviewer.getByRole('region', { name: 'Decision recorded' }).waitFor();
 
   // The acceptance e-mail arrives.
   await waitForMail(admin, `Accepted: ${claimReference}, revision 2`);

@@ -21,7 +21,13 @@ type BadInputCase = {
 };
 
 // Routes that take no input at all.
-const NO_INPUT = ['DELETE /api/session', 'DELETE /api/jobs/:id/claim', 'POST /api/jobs/:id/summary', 'POST /api/jobs/:id/share-links'];
+const NO_INPUT = [
+  'POST /api/notifications/read-all',
+  'DELETE /api/session',
+  'DELETE /api/jobs/:id/claim',
+  'POST /api/jobs/:id/summary',
+  'POST /api/jobs/:id/share-links',
+];
 
 const CASES: Record<string, BadInputCase> = {
   'POST /api/session': { as: 'anonymous', tables: ['sessions'], body: { email: 'no', password: '' }, fields: ['email', 'password'] },
@@ -169,8 +175,30 @@ const CASES: Record<string, BadInputCase> = {
     as: 'reviewer',
     tables: ['reviews', 'review_scores'],
     prepare: async (me) => ({ path: `/api/jobs/${(await claimFor(await createSubmittedJob(), me.id)).id}/reviews` }),
-    body: { decision: 'shrug', scores: [{ key: 'coverage', score: 9, comment: 5 }] },
-    fields: ['decision', 'scores.0.comment', 'scores.0.score'],
+    body: { decision: 'shrug', scores: [{ key: 'coverage', score: 9, comment: 5 }], note: { text: 'x' } },
+    fields: ['decision', 'note', 'scores.0.comment', 'scores.0.score'],
+  },
+  'POST /api/notifications/:id/read': {
+    as: 'technician',
+    tables: ['notifications'],
+    prepare: async () => ({ path: '/api/notifications/first/read' }),
+    body: {},
+    fields: ['id'],
+  },
+  'PUT /api/notifications/prefs/:kind': {
+    as: 'technician',
+    tables: ['notification_prefs'],
+    prepare: async () => ({ path: '/api/notifications/prefs/everything' }),
+    body: { email: [true] },
+    fields: ['email', 'kind'],
+  },
+  // Its input is the queue filter in the query string; a claim would write a timeline event.
+  'POST /api/queue/claim-next': {
+    as: 'reviewer',
+    tables: ['audit_events'],
+    prepare: async () => ({ path: '/api/queue/claim-next?sort=nonsense&claimedByMe=maybe&status=lost' }),
+    body: {},
+    fields: ['claimedByMe', 'sort', 'status'],
   },
   'POST /api/second-reviews/:id/claim': {
     as: 'reviewer',

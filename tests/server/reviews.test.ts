@@ -1,5 +1,5 @@
 import { createApp } from '../../server/app';
-import { AuditEvent, Job, Review, ReviewScore, ReworkItem, Rubric, SecondReview, sequelize } from '../../server/models';
+import { AuditEvent, Job, OutboxMessage, Review, ReviewScore, ReworkItem, Rubric, SecondReview, sequelize } from '../../server/models';
 import { submitReview } from '../../server/services/review-service';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { claimFor, createSubmittedJob, createUser, fullScores, secondReviewByAnother } from '../helpers/factories';
@@ -39,6 +39,59 @@ describe('POST /api/jobs/:id/claim', () => {
     await job.update({ status: 'accepted' });
     const { agent } = await signedInAgent(app, 'reviewer');
     expect((await agent.post(`/api/jobs/${job.id}/claim`)).status).toBe(409);
+  });
+});
+
+describe('POST /api/queue/claim-next', () => {
+  // Each case filters on a fresh technician, so other tests' jobs are not in its queue.
+  const hourAgo = (h: number) => new Date(Date.now() - h * 3_600_000);
+
+  it('claims the next free record in the filter and sort, skipping one another reviewer holds', async () => {
+    const technician = await createUser({ role: 'technician' });
+    const other = await createUser({ role: 'reviewer' });
+    const held = await claimFor(await createSubmittedJob({ technicianId: technician.id, dueAt: hourAgo(3) }), other.id);
+    const next = await createSubmittedJob({ technicianId: technician.id, dueAt: hourAgo(2) });
+    await createSubmittedJob({ technicianId: technician.id, dueAt: hourAgo(1) });
+    const { agent, user } = await signedInAgent(app, 'reviewer');
+    const res = await agent.post(`/api/queue/claim-next?technicianId=${technician.id}`);
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ found: true, jobId: next.id, claimedBy: { id: user.id } });
+    expect((await Job.findByPk(next.id))!.claimedById).toBe(user.id);
+    expect((await Job.findByPk(held.id))!.claimedById).toBe(other.id);
+  });
+
+  it('follows the sort it is given', async () => {
+    const technician = await createUser({ role: 'technician' });
+    await createSubmittedJob({ technicianId: technician.id, dueAt: hourAgo(2) });
+    const later = await createSubmittedJob({ technicianId: technician.id, dueAt: hourAgo(1) });
+    const { agent } = await signedInAgent(app, 'reviewer');
+    const res = await agent.post(`/api/queue/claim-next?technicianId=${technician.id}&sort=due&dir=desc`);
+    expect(res.body.jobId).toBe(later.id);
+  });
+
+  it('gives two reviewers pressing it at once two different records', async () => {
+    const technician = await createUser({ role: 'technician' });
+    const jobs = [await createSubmittedJob({ technicianId: technician.id }), await createSubmittedJob({ technicianId: technician.id })];
+    const [a, b] = [await signedInAgent(app, 'reviewer'), await signedInAgent(app, 'reviewer')];
+    const results = await Promise.all([a, b].map(({ agent }) => agent.post(`/api/queue/claim-next?technicianId=${technician.id}`)));
+    expect(results.map((r) => r.body.jobId).sort()).toEqual(jobs.map((j) => j.id).sort());
+  });
+
+  it('says so when nothing in the filter is free', async () => {
+    const technician = await createUser({ role: 'technician' });
+    const other = await createUser({ role: 'reviewer' });
+    await claimFor(await createSubmittedJob({ technicianId: technician.id }), other.id);
+    const { agent } = await signedInAgent(app, 'reviewer');
+    const res = await agent.post(`/api/queue/claim-next?technicianId=${technician.id}`);
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ found: false, jobId: null });
+  });
+
+  it('refuses a malformed filter by name', async () => {
+    const { agent } = await signedInAgent(app, 'reviewer');
+    const res = await agent.post('/api/queue/claim-next?sort=nonsense&technicianId=1&technicianId=2');
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toEqual(expect.arrayContaining(['sort', 'technicianId']));
   });
 });
 
@@ -94,6 +147,27 @@ describe('POST /api/jobs/:id/reviews', () => {
     expect(await ReviewScore.count({ where: { reviewId: review!.id } })).toBe(DEFAULT_RUBRIC.criteria.length);
     const event = await AuditEvent.findOne({ where: { jobId: job.id, type: 'reviewed' } });
     expect(event!.data).toMatchObject({ decision: 'accept', score: 100, revision: 1 });
+  });
+
+  it("keeps the reviewer's overall note on the review, in the timeline and in the technician's e-mail", async () => {
+    const { agent, job } = await claimedJob();
+    const scores = (await fullScores()).map((s) => (s.key === 'spacing' ? { ...s, score: 2, comment: 'Hall sparse' } : s));
+    const note = 'Good capture overall; only the hall needs two more stations.';
+    const res = await agent.post(`/api/jobs/${job.id}/reviews`).send({ decision: 'rework', scores, note: `  ${note} ` });
+    expect(res.status).toBe(201);
+    expect((await Review.findOne({ where: { jobId: job.id } }))!.note).toBe(note);
+    const event = await AuditEvent.findOne({ where: { jobId: job.id, type: 'reviewed' } });
+    expect(event!.data).toMatchObject({ note });
+    const email = await OutboxMessage.findOne({ where: { jobId: job.id, kind: 'rework_request' } });
+    expect(email!.textBody).toContain(`Note from the reviewer: ${note}`);
+  });
+
+  it('refuses a note that is not text, by name, and writes nothing', async () => {
+    const { agent, job } = await claimedJob();
+    const res = await agent.post(`/api/jobs/${job.id}/reviews`).send({ decision: 'accept', scores: await fullScores(), note: ['a'] });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toEqual(['note']);
+    expect(await Review.count({ where: { jobId: job.id } })).toBe(0);
   });
 
   it('ignores a total sent by the client and stores its own', async () => {

@@ -6,7 +6,7 @@ import crypto from 'node:crypto';
 import type { Express } from 'express';
 
 import { createApp } from '../../server/app';
-import { OutboxMessage, PasswordToken, sequelize } from '../../server/models';
+import { Notification, OutboxMessage, PasswordToken, sequelize } from '../../server/models';
 import { putObject } from '../../server/storage/s3';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { type Role, ROLES } from '../../shared/roles';
@@ -129,6 +129,29 @@ const ROUTES: Record<string, RouteCase> = {
     },
   },
   'GET /api/queue': { allowed: ['reviewer', 'manager'] },
+  'POST /api/queue/claim-next': { allowed: ['reviewer'] },
+  'GET /api/notifications': { allowed: [...ROLES] },
+  'POST /api/notifications/read-all': { allowed: [...ROLES] },
+  'POST /api/notifications/:id/read': {
+    allowed: [...ROLES],
+    prepare: async (me) => {
+      const userId = me?.id ?? (await createUser()).id;
+      const row = await Notification.create({
+        userId,
+        jobId: null,
+        kind: 'job_assigned',
+        text: 'Test notice',
+        createdAt: new Date(),
+        readAt: null,
+      });
+      return { path: `/api/notifications/${row.id}/read` };
+    },
+  },
+  'GET /api/notifications/prefs': { allowed: [...ROLES] },
+  'PUT /api/notifications/prefs/:kind': {
+    allowed: [...ROLES],
+    prepare: async () => ({ path: '/api/notifications/prefs/job_assigned', body: { email: true } }),
+  },
   'POST /api/jobs/:id/claim': {
     allowed: ['reviewer'],
     prepare: async () => ({ path: `/api/jobs/${(await createSubmittedJob()).id}/claim` }),
