@@ -6,7 +6,7 @@ import { Badge } from '@/components/ui/badge';
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
-import { colors, fonts, space } from '@/components/ui/theme';
+import { CARDS_BELOW, colors, fonts, space } from '@/components/ui/theme';
 import type { UserRow } from '@/shared/api-types';
 import { ROLE_LABELS, ROLES } from '@/shared/roles';
 
@@ -16,11 +16,11 @@ export function UsersTable({ users, currentUserId }: { users: UserRow[]; current
   const columns = useMemo<DataTableColumn<UserRow>[]>(
     () => [
       { accessorKey: 'name', header: 'Name', meta: { width: 190 } },
-      { accessorKey: 'email', header: 'E-mail', meta: { width: 260 } },
+      { accessorKey: 'email', header: 'E-mail', meta: { width: 230 } },
       {
         accessorKey: 'role',
         header: 'Role',
-        meta: { width: 380 },
+        meta: { width: 300 },
         cell: ({ row }) => (
           <View role="radiogroup" aria-label={`Role of ${row.original.name}`} style={styles.roles}>
             {ROLES.map((role) => {
@@ -82,6 +82,7 @@ export function UsersTable({ users, currentUserId }: { users: UserRow[]; current
         emptyText="No users yet."
         getRowId={(u) => String(u.id)}
         initialSorting={[{ id: 'name', desc: false }]}
+        cardsBelow={CARDS_BELOW}
       />
     </View>
   );

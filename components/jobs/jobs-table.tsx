@@ -2,6 +2,7 @@ import { useRouter } from 'expo-router';
 import { useMemo } from 'react';
 
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
+import { CARDS_BELOW } from '@/components/ui/theme';
 import {
   JOB_SORT_DEFAULT_DIR,
   type JobSort,
@@ -42,7 +43,7 @@ export function JobsTable({
         enableSorting: false,
         meta: { width: 150 },
       },
-      { id: 'priority', accessorFn: (j) => PRIORITY_LABELS[j.priority], header: 'Priority', enableSorting: false, meta: { width: 150 } },
+      { id: 'priority', accessorFn: (j) => PRIORITY_LABELS[j.priority], header: 'Priority', enableSorting: false, meta: { width: 110 } },
       {
         id: 'status',
         accessorKey: 'status',
@@ -67,6 +68,8 @@ export function JobsTable({
       sorting={[{ id: current, desc: (dir ?? JOB_SORT_DEFAULT_DIR[current]) === 'desc' }]}
       onSortingChange={(next) => onSort(next[0] ? { sort: next[0].id as JobSort, dir: next[0].desc ? 'desc' : 'asc' } : null)}
       onRowPress={(j) => router.push(`/jobs/${j.id}` as never)}
+      cardsBelow={CARDS_BELOW}
+      columnChoice={{ storageKey: 'jobs', hiddenByDefault: ['propertyType', 'visit'] }}
     />
   );
 }

@@ -6,6 +6,10 @@ import { CAMERA_CLASS_LABELS } from '@/shared/capture-record';
 import { describeDue, humanSpan, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
 import type { QueueRow } from '@/shared/review';
 
+// At 1440 px the default columns fit the page without scrolling sideways; the others are a
+// tick away under "Columns".
+export const QUEUE_HIDDEN_BY_DEFAULT = ['propertyType', 'cameraClass', 'submitted'];
+
 export function queueColumns(now: Date, meId: number | undefined): DataTableColumn<QueueRow>[] {
   return [
     { id: 'claim', accessorKey: 'claimReference', header: 'Claim', meta: { width: 130 } },
@@ -29,7 +33,7 @@ export function queueColumns(now: Date, meId: number | undefined): DataTableColu
       id: 'revision',
       accessorFn: (r) => (r.revision > 1 ? `Resubmission (rev ${r.revision})` : 'First (rev 1)'),
       header: 'Revision',
-      meta: { width: 170 },
+      meta: { width: 130 },
     },
     {
       id: 'submitted',
@@ -57,13 +61,13 @@ export function queueColumns(now: Date, meId: number | undefined): DataTableColu
         );
       },
     },
-    { id: 'priority', accessorFn: (r) => PRIORITY_LABELS[r.priority], header: 'Priority', meta: { width: 150 } },
+    { id: 'priority', accessorFn: (r) => PRIORITY_LABELS[r.priority], header: 'Priority', meta: { width: 110 } },
     {
       id: 'status',
       accessorKey: 'status',
       header: 'State · whose turn',
       enableSorting: false,
-      meta: { width: 230 },
+      meta: { width: 210 },
       cell: ({ row }) => (
         <>
           <StatusBadge status={row.original.status} />

@@ -16,12 +16,12 @@ import { Notice } from '@/components/ui/notice';
 import { pageCount, Pager } from '@/components/ui/pager';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
-import { colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+import { CARDS_BELOW, colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { JOB_STATUS_LABELS } from '@/shared/jobs';
 import { QUEUE_PARAM_KEYS, type QueueParams, queueSearch } from '@/shared/queue-params';
 import type { QueueRow, QueueSort } from '@/shared/review';
 
-import { queueColumns } from './queue-columns';
+import { QUEUE_HIDDEN_BY_DEFAULT, queueColumns } from './queue-columns';
 import { QueueFilters } from './queue-filters';
 import { ReassignPanel } from './reassign-panel';
 import { SecondReviewList } from './second-review-list';
@@ -121,6 +121,8 @@ export function QueueScreen() {
         onSortingChange={(next) =>
           setParams({ sort: (next[0]?.id as QueueSort | undefined) ?? '', dir: next[0]?.desc ? 'desc' : 'asc', page: '' })
         }
+        cardsBelow={CARDS_BELOW}
+        columnChoice={{ storageKey: 'queue', hiddenByDefault: QUEUE_HIDDEN_BY_DEFAULT }}
       />
       <Pager
         page={page}

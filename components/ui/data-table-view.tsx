@@ -1,5 +1,7 @@
 // A sortable table built on @tanstack/react-table (v9), rendered with react-native views so
-// it works on phone and desktop. On narrow screens it scrolls sideways.
+// it works on phone and desktop. Where `cardsBelow` is set, a narrower screen gets a list of
+// cards instead (one per row, every shown column as "label: value"); elsewhere a narrow
+// screen scrolls the table sideways. `columnChoice` lets the person hide columns.
 import {
   type ColumnDef,
   createSortedRowModel,
@@ -12,10 +14,13 @@ import {
   useTable,
 } from '@tanstack/react-table';
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { Pressable, ScrollView, StyleSheet, View } from 'react-native';
+import { Pressable, ScrollView, StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { chooseOnKeys } from '@/components/lib/press-keys';
 
+import { Button } from './button';
+import { ColumnChoice, useHiddenColumns } from './column-choice';
+import { Select } from './select';
 import { Text } from './text';
 import { colors, fonts, space } from './theme';
 
@@ -41,6 +46,8 @@ export type DataTableProps<T extends RowData> = {
   sorting?: SortingState;
   onSortingChange?: (sorting: SortingState) => void;
   selectedRowId?: string | null;
+  cardsBelow?: number;
+  columnChoice?: { storageKey: string; hiddenByDefault: string[] };
 };
 
 const SORT_WORD = { asc: 'ascending', desc: 'descending' } as const;
@@ -57,7 +64,17 @@ export default function DataTableView<T extends RowData>({
   sorting: controlled,
   onSortingChange,
   selectedRowId,
+  cardsBelow,
+  columnChoice,
 }: DataTableProps<T>) {
+  const { width: screenWidth } = useWindowDimensions();
+  const cards = cardsBelow !== undefined && screenWidth < cardsBelow;
+  const { hidden, toggle } = useHiddenColumns(columnChoice?.storageKey, columnChoice?.hiddenByDefault ?? []);
+  // Cards show every column: a phone has room down, not across.
+  const shown = useMemo(
+    () => (columnChoice && !cards ? columns.filter((c) => !hidden.includes(String(c.id))) : columns),
+    [columns, columnChoice, cards, hidden],
+  );
   const [localSorting, setLocalSorting] = useState<SortingState>(initialSorting);
   const sorting = controlled ?? localSorting;
   const setSorting = (updater: SortingState | ((old: SortingState) => SortingState)) => {
@@ -67,10 +84,10 @@ export default function DataTableView<T extends RowData>({
   };
   const withTextCells = useMemo(
     () =>
-      columns.map((column) =>
+      shown.map((column) =>
         column.cell ? column : { ...column, cell: (info: { getValue: () => unknown }) => plainCell(info.getValue()) },
       ),
-    [columns],
+    [shown],
   );
   const table = useTable({
     features: dataTableFeatures,
@@ -92,85 +109,164 @@ export default function DataTableView<T extends RowData>({
 
   const width = (meta: unknown) => (meta as { width?: number } | undefined)?.width ?? 160;
 
-  return (
-    <ScrollView horizontal contentContainerStyle={{ flexGrow: 1 }}>
-      <View ref={tableRef} role="table" aria-label={label} style={styles.table}>
-        {table.getHeaderGroups().map((group) => (
-          <View role="row" key={group.id} style={[styles.row, styles.headerRow]}>
-            {group.headers.map((header) => {
-              const sorted = header.column.getIsSorted();
-              const title = flexRender(header.column.columnDef.header, header.getContext());
-              const canSort = header.column.getCanSort();
-              return (
-                <View
-                  role="columnheader"
-                  key={header.id}
-                  style={[styles.cell, { width: width(header.column.columnDef.meta) }]}
-                  aria-sort={sorted ? SORT_WORD[sorted] : 'none'}
-                >
-                  {canSort ? (
-                    <Pressable
-                      role="button"
-                      accessibilityLabel={`Sort by ${String(header.column.columnDef.header)}`}
-                      onPress={header.column.getToggleSortingHandler()}
-                    >
-                      <Text style={styles.headerText}>
-                        {title}
-                        {sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}
-                      </Text>
-                    </Pressable>
-                  ) : (
-                    <Text style={styles.headerText}>{title}</Text>
-                  )}
+  if (cards) {
+    const sortable = shown.filter((c) => c.enableSorting !== false).map((c) => ({ value: String(c.id), label: String(c.header) }));
+    const current = sorting[0];
+    return (
+      <View style={{ gap: space.sm }}>
+        {sortable.length ? (
+          <View style={styles.sortBar}>
+            <Select
+              label="Sort by"
+              value={current?.id ?? ''}
+              allLabel="Default order"
+              options={sortable}
+              onChange={(id) => setSorting(id ? [{ id, desc: current?.id === id ? current.desc : false }] : [])}
+            />
+            {current ? (
+              <Button
+                label={current.desc ? 'Descending' : 'Ascending'}
+                tone="secondary"
+                onPress={() => setSorting([{ id: current.id, desc: !current.desc }])}
+                accessibilityHint="Reverses the order"
+              />
+            ) : null}
+          </View>
+        ) : null}
+        <View ref={tableRef} role="list" aria-label={label} style={{ gap: space.sm }}>
+          {table.getRowModel().rows.length === 0 ? <Text variant="muted">{emptyText}</Text> : null}
+          {table.getRowModel().rows.map((row) => {
+            const [first, ...rest] = row.getAllCells();
+            const body = (
+              <>
+                <View style={styles.cardTitle}>{renderCell(flexRender(first.column.columnDef.cell, first.getContext()), true)}</View>
+                <View style={styles.cardFields}>
+                  {rest.map((cell) => (
+                    <View key={cell.id} style={styles.cardField}>
+                      <Text variant="muted">{String(cell.column.columnDef.header)}</Text>
+                      {renderCell(flexRender(cell.column.columnDef.cell, cell.getContext()))}
+                    </View>
+                  ))}
                 </View>
-              );
-            })}
-          </View>
-        ))}
-        {table.getRowModel().rows.length === 0 ? (
-          <View role="row" style={styles.row}>
-            <View role="cell" style={styles.cell}>
-              <Text variant="muted">{emptyText}</Text>
-            </View>
-          </View>
-        ) : (
-          table.getRowModel().rows.map((row) => {
-            const cells = row.getAllCells().map((cell) => (
-              <View role="cell" key={cell.id} style={[styles.cell, { width: width(cell.column.columnDef.meta) }]}>
-                {renderCell(flexRender(cell.column.columnDef.cell, cell.getContext()))}
-              </View>
-            ));
+              </>
+            );
             const selected = selectedRowId === row.id;
-            return onRowPress ? (
-              <Pressable
-                role="row"
-                key={row.id}
-                aria-selected={selected}
-                onPress={() => onRowPress(row.original)}
-                onFocus={() => onRowFocus?.(row.original)}
-                {...chooseOnKeys(() => onRowPress(row.original))}
-                style={(state) => [styles.row, selected && styles.selected, (state as { focused?: boolean }).focused && styles.focused]}
-              >
-                {cells}
-              </Pressable>
-            ) : (
-              <View role="row" key={row.id} style={styles.row}>
-                {cells}
+            return (
+              <View role="listitem" key={row.id}>
+                {onRowPress ? (
+                  <Pressable
+                    role="button"
+                    onPress={() => onRowPress(row.original)}
+                    onFocus={() => onRowFocus?.(row.original)}
+                    style={(state) => [
+                      styles.card,
+                      selected && styles.selected,
+                      (state as { focused?: boolean }).focused && styles.focused,
+                    ]}
+                  >
+                    {body}
+                  </Pressable>
+                ) : (
+                  <View style={styles.card}>{body}</View>
+                )}
               </View>
             );
-          })
-        )}
+          })}
+        </View>
       </View>
-    </ScrollView>
+    );
+  }
+
+  const chooser = columnChoice ? (
+    <ColumnChoice columns={columns.map((c) => ({ id: String(c.id), header: String(c.header) }))} hidden={hidden} onToggle={toggle} />
+  ) : null;
+
+  return (
+    <View style={{ gap: space.sm }}>
+      {chooser}
+      <ScrollView horizontal contentContainerStyle={{ flexGrow: 1 }}>
+        <View ref={tableRef} role="table" aria-label={label} style={styles.table}>
+          {table.getHeaderGroups().map((group) => (
+            <View role="row" key={group.id} style={[styles.row, styles.headerRow]}>
+              {group.headers.map((header) => {
+                const sorted = header.column.getIsSorted();
+                const title = flexRender(header.column.columnDef.header, header.getContext());
+                const canSort = header.column.getCanSort();
+                return (
+                  <View
+                    role="columnheader"
+                    key={header.id}
+                    style={[styles.cell, { width: width(header.column.columnDef.meta) }]}
+                    aria-sort={sorted ? SORT_WORD[sorted] : 'none'}
+                  >
+                    {canSort ? (
+                      <Pressable
+                        role="button"
+                        accessibilityLabel={`Sort by ${String(header.column.columnDef.header)}`}
+                        onPress={header.column.getToggleSortingHandler()}
+                      >
+                        <Text style={styles.headerText}>
+                          {title}
+                          {sorted === 'asc' ? ' ▲' : sorted === 'desc' ? ' ▼' : ''}
+                        </Text>
+                      </Pressable>
+                    ) : (
+                      <Text style={styles.headerText}>{title}</Text>
+                    )}
+                  </View>
+                );
+              })}
+            </View>
+          ))}
+          {table.getRowModel().rows.length === 0 ? (
+            <View role="row" style={styles.row}>
+              <View role="cell" style={styles.cell}>
+                <Text variant="muted">{emptyText}</Text>
+              </View>
+            </View>
+          ) : (
+            table.getRowModel().rows.map((row) => {
+              const cells = row.getAllCells().map((cell) => (
+                <View role="cell" key={cell.id} style={[styles.cell, { width: width(cell.column.columnDef.meta) }]}>
+                  {renderCell(flexRender(cell.column.columnDef.cell, cell.getContext()))}
+                </View>
+              ));
+              const selected = selectedRowId === row.id;
+              return onRowPress ? (
+                <Pressable
+                  role="row"
+                  key={row.id}
+                  aria-selected={selected}
+                  onPress={() => onRowPress(row.original)}
+                  onFocus={() => onRowFocus?.(row.original)}
+                  {...chooseOnKeys(() => onRowPress(row.original))}
+                  style={(state) => [styles.row, selected && styles.selected, (state as { focused?: boolean }).focused && styles.focused]}
+                >
+                  {cells}
+                </Pressable>
+              ) : (
+                <View role="row" key={row.id} style={styles.row}>
+                  {cells}
+                </View>
+              );
+            })
+          )}
+        </View>
+      </ScrollView>
+    </View>
   );
 }
 
-function plainCell(value: unknown) {
-  return <Text variant="small">{value === null || value === undefined ? '' : String(value)}</Text>;
+function plainCell(value: unknown, title = false) {
+  return (
+    <Text variant={title ? 'label' : 'small'} style={title ? { fontFamily: fonts.semibold } : undefined}>
+      {value === null || value === undefined ? '' : String(value)}
+    </Text>
+  );
 }
 
-function renderCell(content: React.ReactNode) {
-  return typeof content === 'string' || typeof content === 'number' ? plainCell(content) : content;
+function renderCell(content: React.ReactNode, title = false) {
+  return typeof content === 'string' || typeof content === 'number' ? plainCell(content, title) : content;
 }
 
 const styles = StyleSheet.create({
@@ -180,5 +276,10 @@ const styles = StyleSheet.create({
   cell: { paddingHorizontal: space.md, paddingVertical: space.sm, flexGrow: 1 },
   headerText: { fontFamily: fonts.semibold, fontSize: 14, color: colors.ink },
   selected: { backgroundColor: colors.selectedRow, borderLeftWidth: 4, borderLeftColor: colors.accent },
+  sortBar: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.sm },
+  card: { borderWidth: 1, borderColor: colors.line, borderRadius: 8, backgroundColor: colors.surface, padding: space.md, gap: space.sm },
+  cardTitle: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  cardFields: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.sm },
+  cardField: { minWidth: 130, flexShrink: 1, gap: 2 },
   focused: { outlineColor: colors.focus, outlineWidth: 3, outlineStyle: 'solid' } as object,
 });

@@ -31,6 +31,8 @@ export const fonts = {
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32 } as const;
 
 export const WIDE_BREAKPOINT = 1024;
+// Below this width, the Queue, Jobs and Users lists are cards rather than tables.
+export const CARDS_BELOW = 700;
 
 // The pairs the screens put together: text (4.5:1) or large text and UI parts (3:1).
 export const CONTRAST_PAIRS: { name: string; foreground: string; background: string; minimum: 4.5 | 3 }[] = [

@@ -76,8 +76,17 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
 
   // Technician, phone: answer both items, correct the record, resubmit.
   const technician = await open(PHONE, 'wren.');
-  await technician.goto(`${BASE_URL}/jobs/${jobId}`);
+  // The technician's bell has the rework request; its link opens the job.
+  await technician.getByRole('link', { name: /^Notifications, [1-9]\d* unread$/ }).click();
+  await technician.waitForURL(/\/notifications$/);
+  const notice = technician.getByRole('listitem').filter({ hasText: `Rework requested on ${claimReference}` });
+  await notice.getByText(/^Unread/).waitFor();
+  await screenshot(technician, 'notifications-phone');
+  await notice.getByRole('link', { name: 'Open the job' }).click();
+  await technician.waitForURL(`${BASE_URL}/jobs/${jobId}`);
   await technician.getByRole('heading', { name: 'Rework requested' }).waitFor();
+  // The rework deadline is on the job page, in words.
+  await technician.getByText(/^Rework due in \d+ (hours?|days?|minutes?)/).waitFor();
   for (const [n, note] of [
     [1, 'Captured the attic from the hatch: 3 stations.'],
     [2, 'Added a station in the hall doorway.'],
@@ -101,11 +110,20 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
   await technician.getByText(/Resubmitted\. Latest: revision 2/).waitFor();
   await screenshot(technician, 'resubmitted-phone');
 
-  // Reviewer: the diff and the answers, carried-over scores, then accept.
+  // Reviewer: the bell tells of the resubmission; then the diff and the answers in the form's
+  // words, carried-over scores, then accept.
+  await reviewer.goto(`${BASE_URL}/notifications`);
+  await reviewer
+    .getByRole('listitem')
+    .filter({ hasText: `Resubmitted for review: ${claimReference}, revision 2` })
+    .waitFor();
   await reviewer.goto(`${BASE_URL}/queue/${jobId}`);
   await reviewer.getByRole('button', { name: 'Claim to score' }).click();
   await reviewer.getByText('Resubmission: revision 1 → 2').waitFor();
   await reviewer.getByText('Answer: Captured the attic from the hatch: 3 stations.').waitFor();
+  const changes = reviewer.getByRole('group', { name: 'Changes in Notes' });
+  await changes.getByText('Notes for the reviewer: was —, now Attic and hall doorway added as asked.').waitFor();
+  await expect(reviewer.getByText(/rooms\.|totalStations|"kind"/).count()).resolves.toBe(0);
   await reviewer.getByText(/Changed notes: — → Attic and hall doorway added as asked\./).waitFor();
   await reviewer
     .getByText(/Carried over from revision 1/)

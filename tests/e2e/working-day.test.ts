@@ -1,0 +1,90 @@
+// A working day at volume: tables that fit a wide screen (with columns a person can hide and
+// get back), and cards instead of tables on a phone, for the Queue, Jobs and Users.
+import type { BrowserContext, Page } from 'playwright-core';
+
+import { DEMO_PASSWORD } from '../../seeders/data/demo-people';
+import { BASE_URL, DESKTOP, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
+import { demoPerson } from '../helpers/e2e-api';
+
+jest.setTimeout(120_000);
+
+async function openAs(viewport: { width: number; height: number }, who: string, path: string) {
+  const browser = await launchBrowser(viewport);
+  const page = await browser.newPage();
+  await signIn(page, demoPerson(who).email, DEMO_PASSWORD);
+  await page.waitForURL(/\/(queue|trends|jobs|admin)/);
+  await page.goto(`${BASE_URL}${path}`);
+  return { browser, page };
+}
+
+// The right edge of every column header, against the viewport.
+const headerEdges = (page: Page, table: string) =>
+  page.evaluate(
+    `Array.from(document.querySelectorAll('[role="table"][aria-label="${table}"] [role="columnheader"]')).map((h) => [h.textContent, Math.round(h.getBoundingClientRect().right)])`,
+  ) as Promise<[string, number][]>;
+
+// Whether anything on the page scrolls sideways.
+const scrollsSideways = (page: Page) =>
+  page.evaluate(
+    `Array.from(document.querySelectorAll('*')).some((e) => e.scrollWidth > e.clientWidth + 1 && ['auto', 'scroll'].includes(getComputedStyle(e).overflowX))`,
+  ) as Promise<boolean>;
+
+describe('at 1440 × 900', () => {
+  let browser: BrowserContext;
+  afterEach(() => browser?.close());
+
+  it("shows the queue's default columns without scrolling sideways, and remembers a column the reviewer adds", async () => {
+    const opened = await openAs(DESKTOP, 'ravi.', '/queue');
+    browser = opened.browser;
+    const { page } = opened;
+    await page.getByRole('table', { name: 'Review queue' }).getByRole('row').nth(1).waitFor();
+    const edges = await headerEdges(page, 'Review queue');
+    expect(edges.map(([h]) => h)).toEqual(
+      expect.arrayContaining(['Claim', 'Technician', 'Due / time left', 'Priority', 'State · whose turn', 'Claimed by']),
+    );
+    for (const [header, right] of edges) expect([header, right <= DESKTOP.width]).toEqual([header, true]);
+    expect(await scrollsSideways(page)).toBe(false);
+    await screenshot(page, 'queue-default-columns-desktop');
+
+    await page.getByRole('button', { name: 'Columns (3 hidden)' }).click();
+    await page.getByRole('checkbox', { name: 'Camera' }).click();
+    await page.getByRole('columnheader', { name: /Camera/ }).waitFor();
+    await page.reload();
+    await page.getByRole('columnheader', { name: /Camera/ }).waitFor();
+    await expect(page.getByRole('button', { name: 'Columns (2 hidden)' }).count()).resolves.toBe(1);
+  });
+
+  it("shows every column of the admin's Users table, the status and the action included", async () => {
+    const opened = await openAs(DESKTOP, 'alex.', '/admin/users');
+    browser = opened.browser;
+    const { page } = opened;
+    await page.getByRole('table', { name: 'Users' }).getByRole('row').nth(1).waitFor();
+    const edges = await headerEdges(page, 'Users');
+    expect(edges.map(([h]) => h)).toEqual(expect.arrayContaining(['Status', 'Action']));
+    for (const [header, right] of edges) expect([header, right <= DESKTOP.width]).toEqual([header, true]);
+    await screenshot(page, 'users-desktop');
+  });
+});
+
+describe('at 390 × 844', () => {
+  let browser: BrowserContext;
+  afterEach(() => browser?.close());
+
+  it.each([
+    ['ravi.', '/queue', 'Review queue', ['Due / time left', 'State · whose turn', 'Claimed by']],
+    ['mara.', '/jobs', 'Jobs', ['Property', 'Status', 'Due']],
+    ['alex.', '/admin/users', 'Users', ['E-mail', 'Status', 'Action']],
+  ])('%s sees %s as cards with every field, no table and nothing off screen', async (who, path, list, fields) => {
+    const opened = await openAs(PHONE, who, path);
+    browser = opened.browser;
+    const { page } = opened;
+    const cards = page.getByRole('list', { name: list }).getByRole('listitem');
+    await cards.first().waitFor();
+    await expect(page.getByRole('table', { name: list }).count()).resolves.toBe(0);
+    for (const field of fields) await cards.first().getByText(field, { exact: true }).waitFor();
+    expect(await scrollsSideways(page)).toBe(false);
+    const box = (await cards.first().boundingBox())!;
+    expect(box.x + box.width).toBeLessThanOrEqual(PHONE.width);
+    await screenshot(page, `${list.toLowerCase().replace(/ /g, '-')}-cards-phone`);
+  });
+});
