@@ -1,14 +1,37 @@
 // Checks run before a capture record is submitted. The client shows them as the technician
 // types; the server runs the same function at submit and refuses when facts are missing.
 // Missing facts block submission; warnings do not.
-import { CAMERA_CLASS_LABELS, type CaptureRecord, LEVEL_LABELS, REFLECTIVE_LABELS, roomAreaM2, roomStationSum } from './capture-record';
+import {
+  CAMERA_CLASS_LABELS,
+  type CaptureRecord,
+  LEVEL_LABELS,
+  type LevelKind,
+  REFLECTIVE_LABELS,
+  roomAreaM2,
+  roomStationSum,
+} from './capture-record';
 import { expectedStations, MAX_STATION_SPACING_M } from './station-spacing';
 import { AREA_LABEL, fromMetres, fromSquareMetres, roundTo } from './units';
 
 export type Finding = { field: string; message: string };
 export type CheckResult = { missing: Finding[]; warnings: Finding[] };
 
-export function checkCaptureRecord(record: CaptureRecord): CheckResult {
+// Facts from outside the record: when the last revision was submitted (a processing
+// confirmation must be newer), and the station count per level in the attached station file.
+export type CheckContext = {
+  previousSubmittedAt?: string | null;
+  stationFileLevels?: { level: LevelKind; stations: number }[] | null;
+};
+
+// A processing confirmation counts only for the revision it was made for: one made before
+// the last submission belongs to that earlier revision.
+export function processingConfirmedFor(processing: CaptureRecord['processing'], previousSubmittedAt?: string | null): boolean {
+  if (!processing.confirmed) return false;
+  if (!previousSubmittedAt) return true;
+  return Boolean(processing.confirmedAt) && processing.confirmedAt! > new Date(previousSubmittedAt).toISOString();
+}
+
+export function checkCaptureRecord(record: CaptureRecord, context: CheckContext = {}): CheckResult {
   const missing: Finding[] = [];
   const warnings: Finding[] = [];
   const need = (field: string, message: string) => missing.push({ field, message });
@@ -20,6 +43,23 @@ export function checkCaptureRecord(record: CaptureRecord): CheckResult {
   if (!record.glazingFlagged) need('glazingFlagged', 'Say whether glazing was flagged.');
   if (record.models.length === 0) need('models', 'Add the delivered model (at least one).');
   if (!record.processing.confirmed) need('processing.confirmed', 'Confirm that processing started on the capture platform.');
+  else if (!processingConfirmedFor(record.processing, context.previousSubmittedAt))
+    need(
+      'processing.confirmed',
+      'Confirm processing again for this revision: the confirmation on file is from before the last submission.',
+    );
+
+  if (context.stationFileLevels) {
+    const counted = new Map(record.levels.map((l) => [l.level, l.stations]));
+    for (const { level, stations } of context.stationFileLevels) {
+      const inRecord = counted.get(level);
+      if (inRecord !== stations)
+        warn(
+          'levels',
+          `The station file has ${stations} station${stations === 1 ? '' : 's'} on the ${LEVEL_LABELS[level].toLowerCase()}; the record says ${inRecord ?? 'none'}.`,
+        );
+    }
+  }
 
   const sum = roomStationSum(record);
   if (record.totalStations === null) {

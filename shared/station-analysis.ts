@@ -47,12 +47,20 @@ export type LevelAnalysis = {
   weakLinks: ChainLink[];
   rooms: RoomDensity[];
   clarkEvans: ClarkEvans | null;
+  // The maximum spacing this level was judged by (outdoor for the exterior). Absent in
+  // analyses stored before it existed: read it with levelMaxSpacing.
+  maxSpacingM?: number | null;
 };
+
+export const levelMaxSpacing = (analysis: StationAnalysis, level: LevelAnalysis) =>
+  level.maxSpacingM !== undefined ? level.maxSpacingM : analysis.maxSpacingM;
 
 export type StationAnalysis = { maxSpacingM: number | null; levels: LevelAnalysis[] };
 
 export type AnalysisOptions = {
   maxSpacingM: number | null;
+  // For the exterior level; the indoor maximum when not given.
+  outdoorMaxSpacingM?: number | null;
   rooms?: { name: string; areaM2: number | null }[];
   // Overrides the area used for Clark–Evans (m²); by default the level's bounding box grown
   // by half the mean nearest-neighbour distance on every side, so each station counts its share.
@@ -174,7 +182,7 @@ export function analyseLevel(level: LevelKind, all: StationPoint[], options: Ana
   const nearest = nearestNeighbours(registered);
   const distances = nearest.map((n) => n.distance).filter((d): d is number => d !== null);
   const mean = distances.length ? distances.reduce((s, d) => s + d, 0) / distances.length : null;
-  const max = options.maxSpacingM;
+  const max = level === 'exterior' && options.outdoorMaxSpacingM !== undefined ? options.outdoorMaxSpacingM : options.maxSpacingM;
   const chain = registrationChain(registered, max);
 
   let ce: ClarkEvans | null = null;
@@ -213,6 +221,7 @@ export function analyseLevel(level: LevelKind, all: StationPoint[], options: Ana
     weakLinks: chain.filter((c) => c.weak),
     rooms,
     clarkEvans: ce,
+    maxSpacingM: max,
   };
 }
 
@@ -241,9 +250,10 @@ export function suggestedComments(
   const registration: string[] = [];
   for (const level of analysis.levels) {
     const name = levelLabel(level.level);
-    if (level.sparse.length && analysis.maxSpacingM !== null) {
+    const max = levelMaxSpacing(analysis, level);
+    if (level.sparse.length && max !== null && max !== undefined) {
       spacing.push(
-        `${name}: station${level.sparse.length > 1 ? 's' : ''} ${level.sparse.map((n) => `#${n}`).join(', ')} ${level.sparse.length > 1 ? 'are' : 'is'} more than ${show(analysis.maxSpacingM)} from the nearest station.`,
+        `${name}: station${level.sparse.length > 1 ? 's' : ''} ${level.sparse.map((n) => `#${n}`).join(', ')} ${level.sparse.length > 1 ? 'are' : 'is'} more than ${show(max)} from the nearest station.`,
       );
     }
     for (const room of level.rooms.filter((r) => r.short)) {

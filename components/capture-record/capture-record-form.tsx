@@ -5,6 +5,7 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { ApiError } from '@/components/lib/api-client';
 import { lazyView } from '@/components/lib/lazy-view';
 import { saveRecordDraft, useRecordSubmitMutation } from '@/components/queries/capture-record';
+import { useStationAnalysisQuery } from '@/components/queries/jobs';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
@@ -39,7 +40,19 @@ export function CaptureRecordForm({ detail, userId }: { detail: JobDetail; userI
   const form = useForm<FormValues>({ defaultValues: toFormValues(detail.record) });
   const values = useWatch({ control: form.control }) as FormValues;
   const conversion = useMemo(() => toRecord(values), [values]);
-  const findings = useMemo(() => checkCaptureRecord(conversion.record), [conversion.record]);
+  // The record is checked against the attached station file's counts, and a resubmission
+  // against the last submission's time (processing must be confirmed again).
+  const hasStationFile = detail.files.some((f) => f.kind === 'station_coordinates');
+  const stations = useStationAnalysisQuery(jobId, null, hasStationFile);
+  const previousSubmittedAt = detail.revisions.at(-1)?.submittedAt ?? null;
+  const stationFileLevels = useMemo(
+    () => stations.data?.analysis?.levels.map((l) => ({ level: l.level, stations: l.registered })) ?? null,
+    [stations.data],
+  );
+  const findings = useMemo(
+    () => checkCaptureRecord(conversion.record, { previousSubmittedAt, stationFileLevels }),
+    [conversion.record, previousSubmittedAt, stationFileLevels],
+  );
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const submit = useRecordSubmitMutation(jobId);
   const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
@@ -116,10 +129,10 @@ export function CaptureRecordForm({ detail, userId }: { detail: JobDetail; userI
           <DamageSection photos={photos} defaultLossType={detail.job.lossType} />
           <PanoramasSection />
           <FilesSection jobId={jobId} files={detail.files} editable userId={userId} />
-          <StationSection jobId={jobId} revision={null} hasFile={detail.files.some((f) => f.kind === 'station_coordinates')} />
+          <StationSection jobId={jobId} revision={null} hasFile={hasStationFile} />
           <SafetySection />
           <NotesSection />
-          <ProcessingSection />
+          <ProcessingSection previousSubmittedAt={previousSubmittedAt} />
           {wide ? null : submitPanel}
         </View>
         {wide ? <View style={styles.aside}>{submitPanel}</View> : null}

@@ -10,6 +10,7 @@ import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
 import { CAMERA_CLASS_LABELS, CAMERA_CLASSES, GLAZING_FLAGGED, type Hazard, HAZARD_LABELS, HAZARDS } from '@/shared/capture-record';
+import { processingConfirmedFor } from '@/shared/pre-submit-checks';
 import { SCALAR_FIELDS } from '@/shared/record-labels';
 import type { LengthUnit } from '@/shared/units';
 
@@ -75,28 +76,35 @@ export function PanoramasSection() {
   );
 }
 
-export function ProcessingSection() {
+export function ProcessingSection({ previousSubmittedAt }: { previousSubmittedAt: string | null }) {
   const { control, errors } = useRecordForm();
   return (
     <Section title="Processing" summary="Required before submitting">
       <Controller
         control={control}
         name="processing"
-        render={({ field }) => (
-          <View style={{ gap: space.xs }}>
-            <Checkbox
-              label="I checked that the uploaded capture started processing on the capture platform"
-              checked={field.value.confirmed}
-              onChange={(confirmed) => field.onChange({ confirmed, confirmedAt: confirmed ? new Date().toISOString() : null })}
-            />
-            {field.value.confirmedAt ? <Text variant="muted">{`Confirmed ${formatDateTime(field.value.confirmedAt)}`}</Text> : null}
-            {errors['processing.confirmed'] ? (
-              <Text role="alert" style={{ color: colors.fail }}>
-                {errors['processing.confirmed']}
-              </Text>
-            ) : null}
-          </View>
-        )}
+        render={({ field }) => {
+          const fresh = processingConfirmedFor(field.value, previousSubmittedAt);
+          const stale = field.value.confirmed && !fresh;
+          return (
+            <View style={{ gap: space.xs }}>
+              <Checkbox
+                label="I checked that the uploaded capture started processing on the capture platform"
+                hint={stale ? 'Your confirmation was for the last revision: confirm again for this one.' : undefined}
+                checked={fresh}
+                onChange={(confirmed) => field.onChange({ confirmed, confirmedAt: confirmed ? new Date().toISOString() : null })}
+              />
+              {fresh && field.value.confirmedAt ? (
+                <Text variant="muted">{`Confirmed ${formatDateTime(field.value.confirmedAt)}`}</Text>
+              ) : null}
+              {errors['processing.confirmed'] ? (
+                <Text role="alert" style={{ color: colors.fail }}>
+                  {errors['processing.confirmed']}
+                </Text>
+              ) : null}
+            </View>
+          );
+        }}
       />
     </Section>
   );

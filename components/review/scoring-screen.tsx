@@ -1,5 +1,4 @@
 // The reviewer's workspace: the record on one side, the rubric on the other (stacked on phones).
-import { useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
@@ -13,7 +12,6 @@ import type { Workspace } from '@/shared/review';
 
 import { ChangesPanel } from './changes-panel';
 import { ClaimBar } from './claim-bar';
-import { DecisionDone } from './decision-done';
 import { RevisionPanel } from './revision-panel';
 import { RubricColumn } from './rubric-column';
 import { useScoreSheet } from './use-score-sheet';
@@ -21,15 +19,14 @@ import { SCORING_KEYS, useScoringKeys } from './use-scoring-keys';
 
 const StationPlot = lazyView(() => import('@/components/stations/station-plot').then((m) => m.StationPlot), 'the station plan');
 
-export function ScoringScreen({ workspace }: { workspace: Workspace }) {
+export function ScoringScreen({ workspace, onDecided }: { workspace: Workspace; onDecided: (message: string) => void }) {
   const { data: me } = useSessionQuery();
   const { job, revision } = workspace;
   const second = workspace.secondReviewId;
   const scores = useScoreSheet(workspace);
   const [current, setCurrent] = useState(0);
   const [help, setHelp] = useState(false);
-  const [decided, setDecided] = useState<string | null>(null);
-  const { from } = useLocalSearchParams<{ from?: string }>();
+
   const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
   const holdsClaim = second !== null ? workspace.secondClaimedByMe : job.claimedBy?.id === me?.id && me?.role === 'reviewer';
 
@@ -41,8 +38,6 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
     toggleHelp: () => setHelp((h) => !h),
     enabled: holdsClaim && !help,
   });
-
-  if (decided) return <DecisionDone message={decided} queueFilter={typeof from === 'string' ? from : ''} />;
 
   return (
     <View style={{ gap: space.md }}>
@@ -70,7 +65,7 @@ export function ScoringScreen({ workspace }: { workspace: Workspace }) {
               current={current}
               onFocusCriterion={setCurrent}
               stickySummary={wide}
-              onDecided={setDecided}
+              onDecided={onDecided}
             />
           ) : null}
         </View>

@@ -13,7 +13,7 @@ export function StationFindings({ level, units, maxSpacingM }: { level: LevelAna
   return (
     <View style={{ gap: space.xs }}>
       <Text variant="label">{`Findings: ${level.registered} registered station(s), ${level.panoramas} panorama(s)`}</Text>
-      <Text variant="small">{`Nearest-neighbour spacing: mean ${len(level.spacing.mean)}, median ${len(level.spacing.median)}, largest ${len(level.spacing.max)}; limit ${len(maxSpacingM)} for this camera class (common practice).`}</Text>
+      <Text variant="small">{`Nearest-neighbour spacing: mean ${len(level.spacing.mean)}, median ${len(level.spacing.median)}, largest ${len(level.spacing.max)}; limit ${len(maxSpacingM)} for this camera class${level.level === 'exterior' ? ' outdoors' : ''} (common practice).`}</Text>
       <Text variant="small" style={level.sparse.length ? { color: colors.fail, fontFamily: fonts.semibold } : undefined}>
         {level.sparse.length
           ? `Sparse: station(s) ${level.sparse.map((n) => `#${n}`).join(', ')} are farther than the limit from any other station.`

@@ -9,7 +9,7 @@ import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
 import { LEVEL_LABELS, type LevelKind } from '@/shared/capture-record';
 import { boundsOf, scaleBar, viewFor } from '@/shared/plot-geometry';
-import type { StationAnalysis } from '@/shared/station-analysis';
+import { levelMaxSpacing, type StationAnalysis } from '@/shared/station-analysis';
 import type { LengthUnit } from '@/shared/units';
 
 import { StationFindings } from './station-findings';
@@ -163,7 +163,7 @@ export function StationPlot({ analysis, units, keyboard = false }: { analysis: S
         · ◆ supplementary panorama (not registered) · thin grey line: link to the nearest earlier station · thick dashed line: weak link (a
         long jump from everything captured before it, where registration tends to fail).
       </Text>
-      <StationFindings level={data} units={units} maxSpacingM={analysis.maxSpacingM} />
+      <StationFindings level={data} units={units} maxSpacingM={levelMaxSpacing(analysis, data) ?? null} />
     </View>
   );
 }

@@ -85,6 +85,13 @@ export const config = {
     handheld_lidar: env.SPACING_HANDHELD_LIDAR_M ? number('SPACING_HANDHELD_LIDAR_M', 0) : null,
     laser_scanner: number('SPACING_LASER_SCANNER_M', 10),
   } as Record<'tripod_depth' | 'camera_360' | 'handheld_lidar' | 'laser_scanner', number | null>,
+  // Outdoors (the exterior level): from memory, common practice; see MAX_OUTDOOR_STATION_SPACING_M.
+  outdoorStationSpacingM: {
+    tripod_depth: number('OUTDOOR_SPACING_TRIPOD_DEPTH_M', 10 * 0.3048),
+    camera_360: number('OUTDOOR_SPACING_CAMERA_360_M', 10 * 0.3048),
+    handheld_lidar: null,
+    laser_scanner: number('OUTDOOR_SPACING_LASER_SCANNER_M', 15),
+  } as Record<'tripod_depth' | 'camera_360' | 'handheld_lidar' | 'laser_scanner', number | null>,
   uploadMaxBytes: number('UPLOAD_MAX_MB', DEFAULT_UPLOAD_MAX_MB) * 1024 * 1024,
   instanceId: env.INSTANCE_ID ?? crypto.randomUUID(),
 };

@@ -80,15 +80,18 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     const draft = await writeDraft(jobId, record, baseVersion, transaction);
 
     if (job.status === 'rework_requested') await assertReworkAnswered(jobId, transaction);
-    const findings = checkCaptureRecord(record);
+    const last = await CaptureRevision.findOne({ where: { jobId }, order: [['number', 'DESC']], transaction });
+    const findings = checkCaptureRecord(record, {
+      previousSubmittedAt: last?.submittedAt.toISOString() ?? null,
+      stationFileLevels: stationAnalysis?.levels.map((l) => ({ level: l.level, stations: l.registered })) ?? null,
+    });
     if (findings.missing.length > 0) {
       throw invalid(Object.fromEntries(findings.missing.map((f) => [f.field, f.message])));
     }
     await assertPhotosBelongToJob(jobId, record, transaction);
 
     const files = await StoredFile.findAll({ where: { jobId, detachedAt: null }, order: [['id', 'ASC']], transaction });
-    const previous = (await CaptureRevision.max('number', { where: { jobId }, transaction })) as number | null;
-    const number = (previous ?? 0) + 1;
+    const number = (last?.number ?? 0) + 1;
     const submittedAt = new Date();
     await CaptureRevision.create(
       { jobId, number, data: record, files: files.map((f) => f.toView()), findings, stationAnalysis, submittedById: actor.id, submittedAt },

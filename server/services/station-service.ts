@@ -36,6 +36,7 @@ export function analyseFor(record: CaptureRecord, text: string): StationAnalysis
   const { stations } = parseStationFile(text);
   return analyseStations(stations, {
     maxSpacingM: record.cameraClass ? config.stationSpacingM[record.cameraClass] : null,
+    outdoorMaxSpacingM: record.cameraClass ? config.outdoorStationSpacingM[record.cameraClass] : null,
     rooms: record.rooms.map((r) => ({ name: r.name, areaM2: roomAreaM2(r) })),
   });
 }

@@ -102,6 +102,12 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
       .nth(n - 1)
       .waitFor();
   }
+  // The processing confirmation made for revision 1 does not carry over: it is asked again.
+  await technician.getByRole('button', { name: /^Processing.*Show/ }).click();
+  const processing = technician.getByRole('checkbox', { name: /started processing on the capture platform/ });
+  await expect(processing.getAttribute('aria-checked')).resolves.toBe('false');
+  await technician.getByText('Your confirmation was for the last revision: confirm again for this one.').waitFor();
+  await processing.click();
   await technician.getByRole('button', { name: /^Notes.*Show/ }).click();
   await technician.getByLabel('Notes for the reviewer').fill('Attic and hall doorway added as asked.');
   await technician.getByText(/^Saved \d/).waitFor();

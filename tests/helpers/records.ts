@@ -31,3 +31,6 @@ export function completeRecord(overrides: Partial<CaptureRecord> = {}): CaptureR
     ...overrides,
   };
 }
+
+// A resubmission needs processing confirmed again, after the last submission.
+export const confirmedNow = () => ({ confirmed: true, confirmedAt: new Date(Date.now() + 1).toISOString() });

@@ -4,7 +4,7 @@ import { createApp } from '../../server/app';
 import { CaptureRevision, Job, sequelize } from '../../server/models';
 import { feetToMetres } from '../../shared/units';
 import { countRows, resetSignInLimits, saveRecordAs, signedInAgent, submitRecordAs, technicianWithJob } from '../helpers/http';
-import { completeRecord, room } from '../helpers/records';
+import { completeRecord, confirmedNow, room } from '../helpers/records';
 
 const app = createApp();
 afterAll(async () => {
@@ -88,7 +88,11 @@ describe('POST /api/jobs/:id/submit', () => {
     await Job.update({ status: 'rework_requested' }, { where: { id: job.id } });
 
     await saveRecordAs(agent, job.id, completeRecord({ notes: 'added attic stations' }));
-    const second = await submitRecordAs(agent, job.id, completeRecord({ notes: 'added attic stations' }));
+    // The confirmation made for revision 1 does not carry over.
+    const stale = await submitRecordAs(agent, job.id, completeRecord({ notes: 'added attic stations' }));
+    expect(stale.status).toBe(400);
+    expect(stale.body.error.fields['processing.confirmed']).toMatch(/Confirm processing again for this revision/);
+    const second = await submitRecordAs(agent, job.id, completeRecord({ notes: 'added attic stations', processing: confirmedNow() }));
     expect(second.body).toMatchObject({ revision: 2, status: 'resubmitted' });
 
     const one = await agent.get(`/api/jobs/${job.id}/revisions/1`);

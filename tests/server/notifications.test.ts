@@ -5,7 +5,7 @@ import { Notification, OutboxMessage, sequelize } from '../../server/models';
 import { queueOverdueReworkReminders } from '../../server/services/reminder-service';
 import { claimFor, createSubmittedJob, createUser, fullScores, newJobBody, reworkRequested } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent, submitRecordAs } from '../helpers/http';
-import { completeRecord } from '../helpers/records';
+import { completeRecord, confirmedNow } from '../helpers/records';
 
 const app = createApp();
 afterAll(async () => {
@@ -34,7 +34,7 @@ describe('notifications', () => {
     const reviewer = await signedInAgent(app, 'reviewer');
     const { job, item } = await reworkRequested(technician.user.id);
     await technician.agent.put(`/api/rework-items/${item.id}/response`).send({ response: 'fixed', note: 'Attic captured from the hatch' });
-    const res = await submitRecordAs(technician.agent, job.id, completeRecord());
+    const res = await submitRecordAs(technician.agent, job.id, completeRecord({ processing: confirmedNow() }));
     expect(res.status).toBe(201);
     const list = (await reviewer.agent.get('/api/notifications')).body as List;
     expect(list.items.find((i) => i.jobId === job.id)).toMatchObject({

@@ -13,7 +13,7 @@ import { queueOverdueReworkReminders } from '../../server/services/reminder-serv
 import { submitReview } from '../../server/services/review-service';
 import { claimFor, createSubmittedJob, createUser, fullScores, newJobBody, reworkRequested } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent, submitRecordAs } from '../helpers/http';
-import { completeRecord } from '../helpers/records';
+import { completeRecord, confirmedNow } from '../helpers/records';
 import { PNG_1X1 } from '../helpers/sample-files';
 
 const app = createApp();
@@ -208,6 +208,7 @@ describe('answering rework and resubmitting', () => {
     expect(answer.body.item.responseFileIds).toEqual([photo.body.file.id]);
 
     const record = completeRecord({
+      processing: confirmedNow(),
       rooms: [...completeRecord().rooms, { ...completeRecord().rooms[0], key: 'r2', name: 'Attic', level: 'attic', stations: 4 }],
       totalStations: 9,
       levels: [
@@ -235,6 +236,7 @@ describe('answering rework and resubmitting', () => {
     await technician.agent.put(`/api/rework-items/${items[0].id}/response`).send({ response: 'fixed', note: 'Attic added' });
     const record = completeRecord({
       notes: 'Attic added',
+      processing: confirmedNow(),
       rooms: [...completeRecord().rooms, { ...completeRecord().rooms[0], key: 'r2', name: 'Attic', level: 'attic', stations: 1 }],
       totalStations: 6,
       levels: [

@@ -55,12 +55,17 @@ describe('station coordinate files', () => {
     // Kitchen 12 × 15 ft = 180 ft² needs 5 stations at 6 ft (common practice); 4 registered.
     expect(level.rooms[0]).toMatchObject({ room: 'Kitchen', stations: 4, expected: 5, short: true });
 
-    await submitRecordAs(agent, job.id, completeRecord());
+    // The file has 4 registered stations on the ground floor; the record says 5: a warning for
+    // the technician at submit, kept in the revision's findings for the reviewer.
+    const submitted = await submitRecordAs(agent, job.id, completeRecord());
+    const mismatch = 'The station file has 4 stations on the ground floor; the record says 5.';
+    expect(submitted.body.warnings).toContainEqual({ field: 'levels', message: mismatch });
     const stored = await agent.get(`/api/jobs/${job.id}/station-analysis?revision=1`);
     expect(stored.body.analysis.levels[0].weakLinks).toHaveLength(1);
     const { agent: reviewer } = await signedInAgent(app, 'reviewer');
     const workspace = await reviewer.get(`/api/jobs/${job.id}/workspace`);
     expect(workspace.body.revision.stationAnalysis.levels[0].sparse).toEqual([4]);
+    expect(workspace.body.revision.findings.warnings).toContainEqual({ field: 'levels', message: mismatch });
   });
 
   it('answers with no analysis when no station file is attached', async () => {

@@ -116,3 +116,30 @@ describe('checkCaptureRecord', () => {
     expect(checkCaptureRecord(record).warnings.map((w) => w.field)).toEqual(['levels.ground']);
   });
 });
+
+describe('checks against facts outside the record', () => {
+  const submittedAt = '2026-12-01T10:00:00.000Z';
+  it('asks for processing to be confirmed again when the confirmation predates the last submission', () => {
+    const stale = completeRecord({ processing: { confirmed: true, confirmedAt: '2026-12-01T09:00:00.000Z' } });
+    const fresh = completeRecord({ processing: { confirmed: true, confirmedAt: '2026-12-01T11:00:00.000Z' } });
+    expect(checkCaptureRecord(stale, { previousSubmittedAt: submittedAt }).missing.map((f) => f.field)).toEqual(['processing.confirmed']);
+    expect(checkCaptureRecord(fresh, { previousSubmittedAt: submittedAt }).missing).toEqual([]);
+    expect(checkCaptureRecord(stale).missing).toEqual([]);
+  });
+
+  it("warns when the station file's count on a level differs from the record's", () => {
+    const record = completeRecord();
+    const same = checkCaptureRecord(record, { stationFileLevels: [{ level: 'ground', stations: 5 }] });
+    expect(same.warnings.filter((w) => w.field === 'levels')).toEqual([]);
+    const differs = checkCaptureRecord(record, {
+      stationFileLevels: [
+        { level: 'ground', stations: 7 },
+        { level: 'upper', stations: 3 },
+      ],
+    });
+    expect(differs.warnings.filter((w) => w.field === 'levels').map((w) => w.message)).toEqual([
+      'The station file has 7 stations on the ground floor; the record says 5.',
+      'The station file has 3 stations on the upper floor; the record says none.',
+    ]);
+  });
+});

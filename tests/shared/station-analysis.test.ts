@@ -94,6 +94,22 @@ describe('analyseStations', () => {
     expect(level.sparse).toEqual([]);
   });
 
+  it('judges exterior stations by the outdoor spacing, indoor ones by the indoor spacing', () => {
+    // Stations 8 ft (2.4384 m) apart: too far indoors for a tripod depth camera (6 ft, common
+    // practice), within the outdoor 10 ft (from memory, common practice).
+    const eight = 8 * 0.3048;
+    const indoor = [0, eight, 2 * eight].map((x, i) => at(i + 1, x, 0));
+    const outdoor = [0, eight, 2 * eight].map((x, i) => at(i + 4, x, 0, { level: 'exterior' }));
+    const analysis = analyseStations([...indoor, ...outdoor], { maxSpacingM: TRIPOD, outdoorMaxSpacingM: 10 * 0.3048 });
+    const [ground, exterior] = analysis.levels;
+    expect(ground.sparse).toEqual([1, 2, 3]);
+    expect(exterior.sparse).toEqual([]);
+    expect(exterior.weakLinks).toEqual([]);
+    expect(exterior.maxSpacingM).toBeCloseTo(3.048, 6);
+    const suggestions = suggestedComments(analysis, 'ft', (l) => (l === 'exterior' ? 'Exterior' : 'Ground floor'));
+    expect(suggestions.spacing.some((s) => s.startsWith('Exterior'))).toBe(false);
+  });
+
   it('splits levels and flags rooms with fewer stations than their area suggests', () => {
     const pts = [at(1, 0, 0, { room: 'Kitchen' }), at(2, 1.5, 0, { room: 'Kitchen' }), at(3, 0, 0, { level: 'upper', room: 'Bedroom' })];
     // Kitchen 16.72 m² (180 ft²) at 1.8288 m spacing: 5 expected (common practice), 2 present.
