@@ -94,6 +94,18 @@ export function noticeForEvent(type: string, data: Record<string, unknown>, clai
   }
 }
 
+// One notice for a bulk move: "3 jobs are now assigned to you: A, B, C".
+export function bulkMoveText(kind: 'job_assigned' | 'claim_moved', claimReferences: string[]): string {
+  const listed = claimReferences.slice(0, 5).join(', ') + (claimReferences.length > 5 ? ', …' : '');
+  if (kind === 'job_assigned')
+    return claimReferences.length === 1
+      ? `Job ${listed} is now assigned to you`
+      : `${claimReferences.length} jobs are now assigned to you: ${listed}`;
+  return claimReferences.length === 1
+    ? `The claim on ${listed} was moved to you`
+    : `${claimReferences.length} claims were moved to you: ${listed}`;
+}
+
 // Where a notification's link goes for the person reading it.
 export function notificationHref(role: Role, jobId: number | null): string | null {
   if (jobId === null) return null;

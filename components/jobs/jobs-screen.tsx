@@ -60,6 +60,7 @@ export function JobsScreen() {
           sort={sort}
           dir={dir}
           onSort={(next) => setParams({ sort: next?.sort ?? '', dir: next?.dir ?? '', page: '' })}
+          selectable={user?.role === 'manager' || user?.role === 'admin'}
         />
       ) : null}
       {jobs.data && jobs.data.total > jobs.data.pageSize ? (

@@ -98,3 +98,12 @@ export function useJobUpdateMutation(jobId: number) {
     onSuccess: () => invalidateJobs(queryClient),
   });
 }
+
+// Several jobs to one technician, all or none.
+export function useReassignJobsMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: { jobIds: number[]; technicianId: number }) => api.post<{ moved: number }>('/api/jobs/reassign', input),
+    onSettled: () => invalidateJobs(queryClient),
+  });
+}

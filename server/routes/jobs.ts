@@ -13,7 +13,7 @@ import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { getRevision, saveDraft, submitRecord } from '../services/capture-record-service';
 import { detachFile, uploadFile } from '../services/files-service';
-import { createJob, getJobDetail, listJobs, updateJob } from '../services/jobs-service';
+import { createJob, getJobDetail, listJobs, reassignJobs, updateJob } from '../services/jobs-service';
 import { stationAnalysisFor } from '../services/station-service';
 import { captureRecordRules } from '../validators/capture-record';
 import { jobCreateRules, jobListRules, jobUpdateRules } from '../validators/job';
@@ -55,6 +55,20 @@ jobsRouter.get(
 jobsRouter.post('/', jobManagers, validate(...jobCreateRules), async (req, res) => {
   res.status(201).json({ job: await createJob(req.user!, pickJobInput(req.body)) });
 });
+
+// POST /api/jobs/reassign: several jobs to one technician, all or none.
+jobsRouter.post(
+  '/reassign',
+  jobManagers,
+  validate(
+    body('jobIds', 'A list of 1 to 200 job ids').isArray({ min: 1, max: 200 }),
+    body('jobIds.*', 'Job ids are whole numbers').isInt({ min: 1 }).toInt(),
+    body('technicianId', 'Choose a technician').isInt({ min: 1 }).toInt(),
+  ),
+  async (req, res) => {
+    res.json(await reassignJobs(req.user!, { jobIds: req.body.jobIds, technicianId: req.body.technicianId }));
+  },
+);
 
 jobsRouter.get('/:id', anyJobReader, validate(jobId), async (req, res) => {
   res.json(await getJobDetail(req.user!, Number(req.params.id)));

@@ -5,9 +5,11 @@ import { config } from '../config';
 import { inTransaction } from '../db';
 import { conflict, HttpError, invalid, notFound } from '../errors';
 import { Job, User } from '../models';
+import { bulkMoveText } from '../../shared/notifications';
 import { recordEvent } from './audit-service';
 import { pageOfJobs, resolveSearch } from './job-page-query';
 import { activeClaim, queuePageQuery, type QueueParamsIn } from './queue-service';
+import { notify } from './notification-service';
 import { dropReviewDraft } from './review-draft-service';
 
 type Actor = Express.User;
@@ -102,9 +104,22 @@ export async function reassignClaims(actor: Actor, input: { toReviewerId: number
         { transaction },
       );
       await dropReviewDraft(transaction, job.id, null, target.id);
-      await recordEvent(transaction, job.id, actor.id, 'claim_reassigned', { from, to: target.id });
+      await recordEvent(transaction, job.id, actor.id, 'claim_reassigned', { from, to: target.id }, { notify: false });
     }
-    return { moved: jobs.filter((j) => j.claimedById === target.id).length };
+    const moved = jobs.filter((j) => j.claimedById === target.id);
+    // One notice for the whole move, not one per claim.
+    if (moved.length)
+      await notify(
+        transaction,
+        [target],
+        'claim_moved',
+        moved.length === 1 ? moved[0].id : null,
+        bulkMoveText(
+          'claim_moved',
+          moved.map((j) => j.claimReference),
+        ),
+      );
+    return { moved: moved.length };
   });
 }
 

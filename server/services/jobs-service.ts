@@ -17,8 +17,10 @@ import { config } from '../config';
 import { inTransaction } from '../db';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
+import { bulkMoveText } from '../../shared/notifications';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
+import { notify } from './notification-service';
 import { countJobs, isoTime, type JobPageQuery, pageOfJobs, resolveSearch, stateCounts } from './job-page-query';
 
 type Actor = Express.User;
@@ -222,6 +224,42 @@ export async function updateJob(
     }
   });
   return getJobSummary(actor, jobId);
+}
+
+// Several jobs to one technician in one transaction: all move or none do. One timeline event
+// per job, one notice for the technician. Accepted jobs are delivered and stay where they are.
+export async function reassignJobs(actor: Actor, input: { jobIds: number[]; technicianId: number }) {
+  await assertActiveTechnician(input.technicianId);
+  const ids = [...new Set(input.jobIds)];
+  return inTransaction(async (transaction) => {
+    const jobs = await Job.findAll({ where: { id: { [Op.in]: ids } }, order: [['id', 'ASC']], transaction, lock: transaction.LOCK.UPDATE });
+    const missing = ids.filter((id) => !jobs.some((j) => j.id === id));
+    if (missing.length) throw invalid({ jobIds: `No such job: ${missing.join(', ')}. Nothing was moved.` });
+    const delivered = jobs.filter((j) => j.status === 'accepted');
+    if (delivered.length)
+      throw invalid({ jobIds: `Accepted jobs cannot move: ${delivered.map((j) => j.claimReference).join(', ')}. Nothing was moved.` });
+    const moving = jobs.filter((j) => j.technicianId !== input.technicianId);
+    for (const job of moving) {
+      const from = job.technicianId;
+      job.technicianId = input.technicianId;
+      await job.save({ transaction });
+      await recordEvent(transaction, job.id, actor.id, 'reassigned', { from, to: input.technicianId }, { notify: false });
+    }
+    if (moving.length) {
+      const technician = await User.findByPk(input.technicianId, { transaction });
+      await notify(
+        transaction,
+        [technician!],
+        'job_assigned',
+        moving.length === 1 ? moving[0].id : null,
+        bulkMoveText(
+          'job_assigned',
+          moving.map((j) => j.claimReference),
+        ),
+      );
+    }
+    return { moved: moving.length };
+  });
 }
 
 export async function getJobSummary(actor: Actor, jobId: number): Promise<JobSummary> {

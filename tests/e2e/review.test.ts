@@ -93,8 +93,6 @@ it('filters, claims and scores from the keyboard, then requests rework', async (
   await page.getByRole('button', { name: 'Record decision' }).click();
   const done = page.getByRole('region', { name: 'Decision recorded' });
   await done.getByText(`Rework requested for ${claimReference} (1 item). E-mail to the technician queued.`).waitFor();
-  const detail = await as(browser.request, 'mara.', () => call<{ job: { status: string } }>(browser.request, 'get', `/api/jobs/${jobId}`));
-  expect(detail.job.status).toBe('rework_requested');
   await screenshot(page, 'decision-recorded-desktop');
 
   // "Claim next" takes the next record in the same filter, without the queue in between.
@@ -102,4 +100,8 @@ it('filters, claims and scores from the keyboard, then requests rework', async (
   await page.waitForURL(new RegExp(`/queue/${nextJobId}\\?from=`));
   await page.getByText(/You hold the claim/).waitFor();
   await page.getByRole('heading', { name: new RegExp(`${claimReference}-N`) }).waitFor();
+
+  // (Signing in as the manager here shares the page's cookies, so it comes last.)
+  const detail = await as(browser.request, 'mara.', () => call<{ job: { status: string } }>(browser.request, 'get', `/api/jobs/${jobId}`));
+  expect(detail.job.status).toBe('rework_requested');
 });

@@ -4,7 +4,7 @@ import type { BrowserContext, Page } from 'playwright-core';
 
 import { DEMO_PASSWORD } from '../../seeders/data/demo-people';
 import { BASE_URL, DESKTOP, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
-import { demoPerson } from '../helpers/e2e-api';
+import { demoPerson, draftJob } from '../helpers/e2e-api';
 
 jest.setTimeout(120_000);
 
@@ -89,5 +89,35 @@ describe('at 390 × 844', () => {
     const box = (await cards.first().boundingBox())!;
     expect(box.x + box.width).toBeLessThanOrEqual(PHONE.width);
     await screenshot(page, `${list.toLowerCase().replace(/ /g, '-')}-cards-phone`);
+  });
+});
+
+describe('bulk moves', () => {
+  let browser: BrowserContext;
+  afterEach(() => browser?.close());
+
+  it('lets a manager shift-click three jobs and move them to another technician in one go', async () => {
+    const stamp = Date.now().toString(36).toUpperCase();
+    const refs = [1, 2, 3].map((n) => `BULK-${stamp}-${n}`);
+    // The jobs are made through the API in a context of their own (it signs in and out).
+    const setup = await launchBrowser(DESKTOP);
+    try {
+      for (const [i, ref] of refs.entries())
+        await draftJob(setup.request, { technician: 'tess.', claimReference: ref, dueInHours: 24 + i });
+    } finally {
+      await setup.close();
+    }
+    const opened = await openAs(DESKTOP, 'mara.', `/jobs?q=BULK-${stamp}`);
+    browser = opened.browser;
+    const { page } = opened;
+    await page.getByRole('checkbox', { name: `Select ${refs[0]}` }).click();
+    await page.getByRole('checkbox', { name: `Select ${refs[2]}` }).click({ modifiers: ['Shift'] });
+    await page.getByText('3 selected (shift-click selects a range)').waitFor();
+    expect(new URL(page.url()).pathname).toBe('/jobs');
+    await page.getByLabel('Move to technician').selectOption({ label: demoPerson('wren.').name });
+    await page.getByRole('button', { name: 'Move 3 jobs' }).click();
+    await page.getByText(`3 jobs moved to ${demoPerson('wren.').name}.`).waitFor();
+    for (const ref of refs) await page.getByRole('row', { name: new RegExp(`${ref}.*${demoPerson('wren.').name}`) }).waitFor();
+    await screenshot(page, 'jobs-bulk-moved-desktop');
   });
 });

@@ -178,6 +178,12 @@ const CASES: Record<string, BadInputCase> = {
     body: { decision: 'shrug', scores: [{ key: 'coverage', score: 9, comment: 5 }], note: { text: 'x' } },
     fields: ['decision', 'note', 'scores.0.comment', 'scores.0.score'],
   },
+  'POST /api/jobs/reassign': {
+    as: 'manager',
+    tables: ['audit_events', 'notifications'],
+    body: { jobIds: 'all of them', technicianId: { id: 1 } },
+    fields: ['jobIds', 'technicianId'],
+  },
   'POST /api/notifications/:id/read': {
     as: 'technician',
     tables: ['notifications'],

@@ -1,6 +1,6 @@
 import { createApp } from '../../server/app';
 import { config } from '../../server/config';
-import { CaptureDraft, Job, sequelize } from '../../server/models';
+import { AuditEvent, CaptureDraft, Job, Notification, sequelize } from '../../server/models';
 import { createJob, createUser, newJobBody, reworkRequested } from '../helpers/factories';
 import { countRows, resetSignInLimits, signedInAgent } from '../helpers/http';
 
@@ -49,6 +49,34 @@ describe('GET /api/jobs', () => {
       const found = await agent.get(`/api/jobs?q=${job.claimReference}`);
       expect(found.body.jobs.map((j: { id: number }) => j.id)).toEqual([job.id]);
     }
+  });
+});
+
+describe('POST /api/jobs/reassign', () => {
+  it('moves three jobs to one technician in one go: an event per job and one notice for the technician', async () => {
+    const { agent } = await signedInAgent(app, 'manager');
+    const to = await createUser({ role: 'technician' });
+    const jobs = [await createJob(), await createJob(), await createJob()];
+    const res = await agent.post('/api/jobs/reassign').send({ jobIds: jobs.map((j) => j.id), technicianId: to.id });
+    expect(res.status).toBe(200);
+    expect(res.body).toEqual({ moved: 3 });
+    for (const job of jobs) expect((await Job.findByPk(job.id))!.technicianId).toBe(to.id);
+    expect(await AuditEvent.count({ where: { jobId: jobs.map((j) => j.id), type: 'reassigned' } })).toBe(3);
+    const notices = await Notification.findAll({ where: { userId: to.id } });
+    expect(notices.map((n) => n.text)).toEqual([`3 jobs are now assigned to you: ${jobs.map((j) => j.claimReference).join(', ')}`]);
+  });
+
+  it('moves none when one cannot move, and says which', async () => {
+    const { agent } = await signedInAgent(app, 'manager');
+    const to = await createUser({ role: 'technician' });
+    const jobs = [await createJob(), await createJob(), await createJob({ status: 'accepted' })];
+    const before = await Promise.all(jobs.map(async (j) => (await Job.findByPk(j.id))!.technicianId));
+    const res = await agent.post('/api/jobs/reassign').send({ jobIds: jobs.map((j) => j.id), technicianId: to.id });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields.jobIds).toBe(`Accepted jobs cannot move: ${jobs[2].claimReference}. Nothing was moved.`);
+    expect(await Promise.all(jobs.map(async (j) => (await Job.findByPk(j.id))!.technicianId))).toEqual(before);
+    expect(await AuditEvent.count({ where: { jobId: jobs.map((j) => j.id), type: 'reassigned' } })).toBe(0);
+    expect(await Notification.count({ where: { userId: to.id } })).toBe(0);
   });
 });
 

@@ -58,6 +58,16 @@ describe('notifications', () => {
     expect((await manager.agent.post('/api/claims/reassign').send({ toReviewerId: to.user.id, jobIds: [other.id] })).status).toBe(200);
     const list = (await to.agent.get('/api/notifications')).body as List;
     expect(list.items.find((i) => i.jobId === other.id)).toMatchObject({ kind: 'claim_moved' });
+
+    // Several claims moved at once: one notice, naming them.
+    const many = [await claimFor(await createSubmittedJob(), from.id), await claimFor(await createSubmittedJob(), from.id)];
+    const target = await signedInAgent(app, 'reviewer');
+    await manager.agent
+      .post('/api/claims/reassign')
+      .send({ toReviewerId: target.user.id, jobIds: many.map((j) => j.id) })
+      .expect(200);
+    const told = ((await target.agent.get('/api/notifications')).body as List).items;
+    expect(told.map((i) => i.text)).toEqual([`2 claims were moved to you: ${many.map((j) => j.claimReference).join(', ')}`]);
   });
 
   it('marks one read, then all, and lets nobody mark or see anyone else’s', async () => {

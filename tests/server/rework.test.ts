@@ -254,7 +254,9 @@ describe('answering rework and resubmitting', () => {
     );
     expect(workspace.previous.items[0]).toMatchObject({ title: 'Coverage completeness', response: 'fixed', responseNote: 'Attic added' });
     // Rooms changed, so coverage starts empty; processing did not, so it is offered again.
-    expect(Object.keys(workspace.previous.carried)).toEqual(expect.arrayContaining(['processing', 'supplementary']));
+    // Processing is confirmed anew for each revision, so its score is never carried over.
+    expect(Object.keys(workspace.previous.carried)).toEqual(expect.arrayContaining(['supplementary']));
+    expect(workspace.previous.carried).not.toHaveProperty('processing');
     expect(workspace.previous.carried).not.toHaveProperty('coverage');
   });
 

@@ -130,6 +130,10 @@ const ROUTES: Record<string, RouteCase> = {
   },
   'GET /api/queue': { allowed: ['reviewer', 'manager'] },
   'POST /api/queue/claim-next': { allowed: ['reviewer'] },
+  'POST /api/jobs/reassign': {
+    allowed: ['manager', 'admin'],
+    prepare: async () => ({ body: { jobIds: [(await createJob()).id], technicianId: (await createUser({ role: 'technician' })).id } }),
+  },
   'GET /api/notifications': { allowed: [...ROLES] },
   'POST /api/notifications/read-all': { allowed: [...ROLES] },
   'POST /api/notifications/:id/read': {
