@@ -32,7 +32,11 @@ export type StoredFile = {
   sizeBytes: number;
   sha256: string;
   uploadedAt: string;
+  // A photo's caption; absent on files stored before captions existed.
+  caption?: string | null;
 };
+
+export const CAPTION_MAX_LENGTH = 300;
 
 // The default upload limit; the server's UPLOAD_MAX_MB may lower or raise it.
 export const DEFAULT_UPLOAD_MAX_MB = 25;

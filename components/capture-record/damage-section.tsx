@@ -51,7 +51,7 @@ export function DamageSection({ photos, defaultLossType }: { photos: StoredFile[
                 {photos.map((photo) => (
                   <Checkbox
                     key={photo.id}
-                    label={photo.name}
+                    label={photo.caption ? `${photo.name}: ${photo.caption}` : photo.name}
                     checked={photoField.value.includes(photo.id)}
                     onChange={(on) =>
                       photoField.onChange(on ? [...photoField.value, photo.id] : photoField.value.filter((id: number) => id !== photo.id))

@@ -13,6 +13,7 @@ export class StoredFile extends Model<InferAttributes<StoredFile>, InferCreation
   declare storageKey: string;
   declare uploadedById: number;
   declare detachedAt: Date | null;
+  declare caption: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
 
   toView(): StoredFileView {
@@ -24,6 +25,7 @@ export class StoredFile extends Model<InferAttributes<StoredFile>, InferCreation
       sizeBytes: Number(this.sizeBytes),
       sha256: this.sha256,
       uploadedAt: this.createdAt.toISOString(),
+      caption: this.caption ?? null,
     };
   }
 
@@ -40,6 +42,7 @@ export class StoredFile extends Model<InferAttributes<StoredFile>, InferCreation
         storageKey: { type: DataTypes.STRING(255), allowNull: false, unique: true },
         uploadedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: false },
         detachedAt: { type: DataTypes.DATE(3), allowNull: true },
+        caption: { type: DataTypes.STRING(300), allowNull: true },
         createdAt: DataTypes.DATE(3),
       },
       { sequelize, tableName: 'files', updatedAt: false },

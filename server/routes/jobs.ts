@@ -4,7 +4,7 @@ import multer from 'multer';
 
 import type { CaptureRecord } from '../../shared/capture-record';
 import { CONTACT_FIELDS } from '../../shared/contacts';
-import { fileTooLargeMessage, UPLOAD_KINDS, type UploadKind } from '../../shared/files';
+import { CAPTION_MAX_LENGTH, fileTooLargeMessage, UPLOAD_KINDS, type UploadKind } from '../../shared/files';
 import { JOB_STATUSES, type JobSort, type JobStatus, pickContacts, pickJobInput } from '../../shared/jobs';
 import { config } from '../config';
 import { HttpError, invalid } from '../errors';
@@ -12,7 +12,7 @@ import { requireBaseVersion } from '../middleware/base-version';
 import { requireRole } from '../middleware/require-auth';
 import { validate } from '../middleware/validate';
 import { getRevision, saveDraft, submitRecord } from '../services/capture-record-service';
-import { detachFile, uploadFile } from '../services/files-service';
+import { captionFile, detachFile, uploadFile } from '../services/files-service';
 import { createJob, getJobDetail, listJobs, reassignJobs, updateJob } from '../services/jobs-service';
 import { stationAnalysisFor } from '../services/station-service';
 import { captureRecordRules } from '../validators/capture-record';
@@ -171,6 +171,19 @@ jobsRouter.get(
   validate(jobId, query('revision', 'Must be a revision number').optional().isInt({ min: 1 }).toInt()),
   async (req, res) => {
     res.json(await stationAnalysisFor(req.user!, Number(req.params.id), req.query.revision ? Number(req.query.revision) : null));
+  },
+);
+
+jobsRouter.patch(
+  '/:id/files/:fileId',
+  technicianOnly,
+  validate(
+    jobId,
+    param('fileId', 'Must be a file id').isInt({ min: 1 }).toInt(),
+    body('caption', `Text of at most ${CAPTION_MAX_LENGTH} characters`).isString().isLength({ max: CAPTION_MAX_LENGTH }),
+  ),
+  async (req, res) => {
+    res.json({ file: await captionFile(req.user!, Number(req.params.id), Number(req.params.fileId), req.body.caption) });
   },
 );
 

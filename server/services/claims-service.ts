@@ -1,15 +1,15 @@
 import { Op, type Transaction } from 'sequelize';
 
+import { bulkMoveText } from '../../shared/notifications';
 import { claimExpiresAt } from '../../shared/review-rules';
 import { config } from '../config';
 import { inTransaction } from '../db';
 import { conflict, HttpError, invalid, notFound } from '../errors';
 import { Job, User } from '../models';
-import { bulkMoveText } from '../../shared/notifications';
 import { recordEvent } from './audit-service';
 import { pageOfJobs, resolveSearch } from './job-page-query';
-import { activeClaim, queuePageQuery, type QueueParamsIn } from './queue-service';
 import { notify } from './notification-service';
+import { activeClaim, queuePageQuery, type QueueParamsIn } from './queue-service';
 import { dropReviewDraft } from './review-draft-service';
 
 type Actor = Express.User;

@@ -86,6 +86,16 @@ export async function openFile(actor: Actor, fileId: number) {
   }
 }
 
+export async function captionFile(actor: Actor, jobId: number, fileId: number, caption: string) {
+  const job = await findJobFor(actor, jobId);
+  assertAssignedTechnician(actor, job);
+  assertFilesEditable(job.status);
+  const file = await StoredFile.findOne({ where: { id: fileId, jobId, detachedAt: null } });
+  if (!file) throw notFound('File');
+  await file.update({ caption: caption.trim() || null });
+  return file.toView();
+}
+
 export async function detachFile(actor: Actor, jobId: number, fileId: number) {
   const job = await findJobFor(actor, jobId);
   assertAssignedTechnician(actor, job);

@@ -13,15 +13,15 @@ import {
   type JobSummary,
   pickJobInput,
 } from '../../shared/jobs';
+import { bulkMoveText } from '../../shared/notifications';
 import { config } from '../config';
 import { inTransaction } from '../db';
 import { HttpError, invalid } from '../errors';
 import { CaptureDraft, CaptureRevision, Job, StoredFile, User } from '../models';
-import { bulkMoveText } from '../../shared/notifications';
 import { recordEvent } from './audit-service';
 import { findJobFor } from './job-access';
-import { notify } from './notification-service';
 import { countJobs, isoTime, type JobPageQuery, pageOfJobs, resolveSearch, stateCounts } from './job-page-query';
+import { notify } from './notification-service';
 
 type Actor = Express.User;
 

@@ -130,12 +130,12 @@ it('runs rework → e-mail → answers → resubmission → diff → acceptance 
   const changes = reviewer.getByRole('group', { name: 'Changes in Notes' });
   await changes.getByText('Notes for the reviewer: was —, now Attic and hall doorway added as asked.').waitFor();
   await expect(reviewer.getByText(/rooms\.|totalStations|"kind"/).count()).resolves.toBe(0);
-  await reviewer.getByText(/Changed notes: — → Attic and hall doorway added as asked\./).waitFor();
   await reviewer
     .getByText(/Carried over from revision 1/)
     .first()
     .waitFor();
-  await pressAll(reviewer, ['4', 'j', 'j', '4', 'j', 'j', 'j', 'j', 'j', 'j', 'j', '4']);
+  // Processing was confirmed anew for revision 2, so it is scored again ('p'), not carried.
+  await pressAll(reviewer, ['4', 'j', 'j', '4', 'j', 'j', 'j', 'j', 'j', 'j', 'p', 'j', '4']);
   await reviewer.getByText('100.0', { exact: true }).waitFor();
   await screenshot(reviewer, 'resubmission-review-desktop');
   await reviewer.getByRole('radiogroup', { name: 'Decision' }).getByRole('radio', { name: 'Accept' }).click();

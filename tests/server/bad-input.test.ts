@@ -151,6 +151,13 @@ const CASES: Record<string, BadInputCase> = {
     upload: { field: 'file', buffer: PNG_1X1, filename: 'a.png', fields: { kind: 'selfie' } },
     fields: ['kind'],
   },
+  'PATCH /api/jobs/:id/files/:fileId': {
+    as: 'technician',
+    tables: ['files'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/files/first` }),
+    body: { caption: ['not', 'text'] },
+    fields: ['caption', 'fileId'],
+  },
   'DELETE /api/jobs/:id/files/:fileId': {
     as: 'technician',
     tables: ['files'],

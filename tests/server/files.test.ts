@@ -114,6 +114,21 @@ describe('DELETE /api/jobs/:id/files/:fileId', () => {
   });
 });
 
+describe('PATCH /api/jobs/:id/files/:fileId', () => {
+  it("keeps a photo's caption, trimmed, for the job's technician only", async () => {
+    const { agent, job } = await technicianWithJob(app);
+    const upload = await agent.post(`/api/jobs/${job.id}/files`).field('kind', 'photo').attach('file', PNG_1X1, 'p.png');
+    const res = await agent
+      .patch(`/api/jobs/${job.id}/files/${upload.body.file.id}`)
+      .send({ caption: ' Kitchen ceiling stain, east corner ' });
+    expect(res.status).toBe(200);
+    expect(res.body.file.caption).toBe('Kitchen ceiling stain, east corner');
+    expect((await agent.get(`/api/jobs/${job.id}`)).body.files[0].caption).toBe('Kitchen ceiling stain, east corner');
+    const { agent: other } = await signedInAgent(app, 'technician');
+    expect((await other.patch(`/api/jobs/${job.id}/files/${upload.body.file.id}`).send({ caption: 'x' })).status).toBe(404);
+  });
+});
+
 describe('POST /api/jobs/:id/files, a file that can never pass', () => {
   // Only the declared length is sent with a first slice of the body: the answer must come
   // back before the rest (30 MB) is ever sent.

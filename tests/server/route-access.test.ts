@@ -111,6 +111,14 @@ const ROUTES: Record<string, RouteCase> = {
       upload: { field: 'file', buffer: PNG_1X1, filename: 'kitchen.png', fields: { kind: 'photo' } },
     }),
   },
+  'PATCH /api/jobs/:id/files/:fileId': {
+    allowed: ['technician'],
+    prepare: async (me) => {
+      const job = await jobFor(me);
+      const file = await createStoredFile(job.id, job.technicianId, { sizeBytes: PNG_1X1.length });
+      return { path: `/api/jobs/${job.id}/files/${file.id}`, body: { caption: 'Porch, north side' } };
+    },
+  },
   'DELETE /api/jobs/:id/files/:fileId': {
     allowed: ['technician'],
     prepare: async (me) => {
