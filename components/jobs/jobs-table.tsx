@@ -114,6 +114,7 @@ export function JobsTable({
         onSortingChange={(next) => onSort(next[0] ? { sort: next[0].id as JobSort, dir: next[0].desc ? 'desc' : 'asc' } : null)}
         onRowPress={(j) => router.push(`/jobs/${j.id}` as never)}
         cardsBelow={CARDS_BELOW}
+        rowLabel={(j) => j.claimReference}
         columnChoice={{ storageKey: 'jobs', hiddenByDefault: ['propertyType', 'visit'] }}
       />
     </View>

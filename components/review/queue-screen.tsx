@@ -122,6 +122,7 @@ export function QueueScreen() {
           setParams({ sort: (next[0]?.id as QueueSort | undefined) ?? '', dir: next[0]?.desc ? 'desc' : 'asc', page: '' })
         }
         cardsBelow={CARDS_BELOW}
+        rowLabel={(r) => r.claimReference}
         columnChoice={{ storageKey: 'queue', hiddenByDefault: QUEUE_HIDDEN_BY_DEFAULT }}
       />
       <Pager

@@ -47,6 +47,8 @@ export type DataTableProps<T extends RowData> = {
   onSortingChange?: (sorting: SortingState) => void;
   selectedRowId?: string | null;
   cardsBelow?: number;
+  // Names a row's "Open" button on a card ("Open MRK-26-1001").
+  rowLabel?: (row: T) => string;
   columnChoice?: { storageKey: string; hiddenByDefault: string[] };
 };
 
@@ -65,6 +67,7 @@ export default function DataTableView<T extends RowData>({
   onSortingChange,
   selectedRowId,
   cardsBelow,
+  rowLabel,
   columnChoice,
 }: DataTableProps<T>) {
   const { width: screenWidth } = useWindowDimensions();
@@ -152,23 +155,16 @@ export default function DataTableView<T extends RowData>({
             );
             const selected = selectedRowId === row.id;
             return (
-              <View role="listitem" key={row.id}>
+              <View role="listitem" key={row.id} style={[styles.card, selected && styles.selected]}>
+                {body}
+                {/* A button of its own: a card may hold controls (tick boxes), which must not sit inside another control. */}
                 {onRowPress ? (
-                  <Pressable
-                    role="button"
+                  <Button
+                    label={rowLabel ? `Open ${rowLabel(row.original)}` : 'Open'}
+                    tone="secondary"
                     onPress={() => onRowPress(row.original)}
-                    onFocus={() => onRowFocus?.(row.original)}
-                    style={(state) => [
-                      styles.card,
-                      selected && styles.selected,
-                      (state as { focused?: boolean }).focused && styles.focused,
-                    ]}
-                  >
-                    {body}
-                  </Pressable>
-                ) : (
-                  <View style={styles.card}>{body}</View>
-                )}
+                  />
+                ) : null}
               </View>
             );
           })}

@@ -28,6 +28,7 @@ const SCREENS: Record<string, { who: string; visits: Record<string, Visit> }> = 
       'my jobs': { path: '/jobs', ready: 'My jobs' },
       'job and capture record': { path: firstJob('draft,rework_requested'), ready: /^Job / },
       'my quality': { path: '/trends/mine', ready: /quality/i },
+      notifications: { path: '/notifications', ready: 'Notifications' },
     },
   },
   reviewer: {
@@ -35,6 +36,7 @@ const SCREENS: Record<string, { who: string; visits: Record<string, Visit> }> = 
     visits: {
       queue: { path: '/queue', ready: /Queue/ },
       'scoring workspace': { path: firstQueued, ready: /Review / },
+      notifications: { path: '/notifications', ready: 'Notifications' },
     },
   },
   manager: {

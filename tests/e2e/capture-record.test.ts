@@ -71,12 +71,23 @@ it('fills, uploads, warns, submits', async () => {
   await page.getByRole('button', { name: 'Add a model' }).click();
   await page.getByLabel('Model reference on the capture platform').fill('TRC-55012');
 
-  // Upload a photo and watch the progress bar reach 100 %.
+  // Two photos in one pick; watch the progress bars reach 100 %, then caption one.
   const chooser = page.waitForEvent('filechooser');
-  await page.getByRole('button', { name: 'Choose a file and upload' }).click();
-  await (await chooser).setFiles({ name: 'kitchen-ceiling.png', mimeType: 'image/png', buffer: PNG_1X1 });
+  await page.getByRole('button', { name: 'Choose photos and upload' }).click();
+  await (
+    await chooser
+  ).setFiles([
+    { name: 'kitchen-ceiling.png', mimeType: 'image/png', buffer: PNG_1X1 },
+    { name: 'hall-door.png', mimeType: 'image/png', buffer: PNG_1X1 },
+  ]);
   await page.getByText('Uploaded kitchen-ceiling.png: 100 %').waitFor();
+  await page.getByText('Uploaded hall-door.png: 100 %').waitFor();
   await page.getByText('kitchen-ceiling.png', { exact: true }).waitFor();
+  const caption = page.getByLabel('Caption for kitchen-ceiling.png');
+  await caption.fill('Kitchen ceiling stain, east corner');
+  await caption.blur();
+  await page.getByText('Caption saved').waitFor();
+  await expect(page.getByRole('button', { name: 'Take photos' }).count()).resolves.toBe(1);
 
   // Still missing: processing confirmation; the warning about too few stations shows already.
   await page.getByText('Confirm that processing started on the capture platform.').waitFor();
