@@ -1,11 +1,11 @@
-import { StyleSheet, View } from 'react-native';
+import { Image, StyleSheet, View } from 'react-native';
 
 import { Badge } from '@/components/ui/badge';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
 import type { StoredFile } from '@/shared/files';
 import { REWORK_RESPONSE_LABELS, type Workspace } from '@/shared/review';
-import { groupChangesBySection } from '@/shared/revision-diff';
+import { type Change, groupChangesBySection } from '@/shared/revision-diff';
 
 const KIND_WORD = { added: 'Added', removed: 'Removed', changed: 'Changed' } as const;
 
@@ -17,7 +17,7 @@ export function ChangesPanel({
 }: {
   previous: NonNullable<Workspace['previous']>;
   currentRevision: number;
-  files: Pick<StoredFile, 'id' | 'name'>[];
+  files: Pick<StoredFile, 'id' | 'name' | 'contentType'>[];
 }) {
   const fileName = (id: number) => files.find((f) => f.id === id)?.name ?? 'a file no longer attached';
   const groups = groupChangesBySection(previous.changes);
@@ -51,20 +51,38 @@ export function ChangesPanel({
       {groups.map((group) => (
         <View key={group.section} style={styles.group} role="group" aria-label={`Changes in ${group.title}`}>
           <Text style={{ fontFamily: fonts.semibold }}>{group.title}</Text>
-          {group.changes.map((change) => (
-            <Text key={`${change.path}-${change.kind}`} variant="small">
-              {change.kind === 'changed'
-                ? `${change.label}: was ${change.before}, now ${change.after}`
-                : `${KIND_WORD[change.kind]}: ${change.label} (${change.kind === 'added' ? change.after : change.before})`}
-            </Text>
-          ))}
+          {group.changes.map((change) => {
+            const image = addedImage(change, files);
+            return (
+              <View key={`${change.path}-${change.kind}`} style={image ? styles.withThumb : undefined}>
+                {image ? (
+                  <Image source={{ uri: `/api/files/${image.id}` }} style={styles.thumb} accessibilityLabel={`Preview of ${image.name}`} />
+                ) : null}
+                <Text variant="small" style={{ flexShrink: 1 }}>
+                  {change.kind === 'changed'
+                    ? `${change.label}: was ${change.before}, now ${change.after}`
+                    : `${KIND_WORD[change.kind]}: ${change.label} (${change.kind === 'added' ? change.after : change.before})`}
+                </Text>
+              </View>
+            );
+          })}
         </View>
       ))}
     </View>
   );
 }
 
+// A photo attached since the last revision, shown as a thumbnail beside its line.
+function addedImage(change: Change, files: Pick<StoredFile, 'id' | 'name' | 'contentType'>[]) {
+  if (change.part !== 'files' || change.kind !== 'added') return null;
+  const id = Number(change.path.split('.')[1]);
+  const file = files.find((f) => f.id === id);
+  return file && file.contentType.startsWith('image/') ? file : null;
+}
+
 const styles = StyleSheet.create({
+  withThumb: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  thumb: { width: 96, height: 64, borderRadius: 4, backgroundColor: colors.paper },
   card: { backgroundColor: colors.surface, borderWidth: 1, borderColor: colors.accent, borderRadius: 8, padding: space.lg, gap: space.sm },
   item: { borderWidth: 1, borderColor: colors.line, borderRadius: 6, padding: space.sm, gap: 2 },
   group: { gap: 2, paddingTop: space.xs },
