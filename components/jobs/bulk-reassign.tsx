@@ -2,7 +2,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 
-import { useReassignJobsMutation } from '@/components/queries/jobs';
+import { BULK_MOVE_MAX, useReassignJobsMutation } from '@/components/queries/jobs';
 import { useTechniciansQuery } from '@/components/queries/technicians';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -15,12 +15,18 @@ export function BulkReassign({
   pageCount,
   onSelectPage,
   onClear,
+  filterTotal,
+  onSelectFilter,
 }: {
   selected: number[];
   pageCount: number;
   onSelectPage: () => void;
   onClear: () => void;
+  // How many jobs match the current filter (very large when the count was capped).
+  filterTotal: number;
+  onSelectFilter: () => Promise<void>;
 }) {
+  const [selecting, setSelecting] = useState(false);
   const technicians = useTechniciansQuery();
   const reassign = useReassignJobsMutation();
   const [technicianId, setTechnicianId] = useState('');
@@ -44,6 +50,20 @@ export function BulkReassign({
       </Text>
       <View style={styles.row}>
         <Button label={`Select all ${pageCount} on this page`} tone="secondary" onPress={onSelectPage} />
+        {filterTotal > pageCount && filterTotal <= BULK_MOVE_MAX ? (
+          <Button
+            label={`Select all ${filterTotal} in this filter`}
+            tone="secondary"
+            busy={selecting}
+            onPress={() => {
+              setSelecting(true);
+              void onSelectFilter().finally(() => setSelecting(false));
+            }}
+          />
+        ) : null}
+        {filterTotal > BULK_MOVE_MAX ? (
+          <Text variant="muted">{`Narrow the filter to select all: at most ${BULK_MOVE_MAX} move at once.`}</Text>
+        ) : null}
         {selected.length ? <Button label="Clear selection" tone="secondary" onPress={onClear} /> : null}
       </View>
       {selected.length ? (

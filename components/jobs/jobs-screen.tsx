@@ -1,7 +1,7 @@
 import { useLocalSearchParams, useRouter } from 'expo-router';
 import { View } from 'react-native';
 
-import { useJobsQuery } from '@/components/queries/jobs';
+import { jobIdsInFilter, useJobsQuery } from '@/components/queries/jobs';
 import { useSessionQuery } from '@/components/queries/session';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
@@ -61,6 +61,8 @@ export function JobsScreen() {
           dir={dir}
           onSort={(next) => setParams({ sort: next?.sort ?? '', dir: next?.dir ?? '', page: '' })}
           selectable={user?.role === 'manager' || user?.role === 'admin'}
+          filterTotal={jobs.data?.totalIsAtLeast ? Number.MAX_SAFE_INTEGER : (jobs.data?.total ?? 0)}
+          idsInFilter={() => jobIdsInFilter({ status: status ? [status] : undefined, technicianId, q: q || undefined, sort, dir })}
         />
       ) : null}
       {jobs.data && jobs.data.total > jobs.data.pageSize ? (

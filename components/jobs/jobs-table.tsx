@@ -27,6 +27,8 @@ export function JobsTable({
   dir,
   onSort,
   selectable = false,
+  filterTotal = 0,
+  idsInFilter,
 }: {
   jobs: JobSummary[];
   sort?: JobSort;
@@ -34,6 +36,9 @@ export function JobsTable({
   onSort: (next: Sorted) => void;
   // Managers select rows to move them together; shift-click selects a range.
   selectable?: boolean;
+  // For "select all in this filter": how many match, and their ids.
+  filterTotal?: number;
+  idsInFilter?: () => Promise<number[]>;
 }) {
   const router = useRouter();
   const [selected, setSelected] = useState<number[]>([]);
@@ -102,6 +107,8 @@ export function JobsTable({
           pageCount={jobs.length}
           onSelectPage={() => setSelected(jobs.map((j) => j.id))}
           onClear={() => setSelected([])}
+          filterTotal={filterTotal}
+          onSelectFilter={async () => setSelected((await idsInFilter?.()) ?? [])}
         />
       ) : null}
       <DataTable

@@ -107,3 +107,16 @@ export function useReassignJobsMutation() {
     onSettled: () => invalidateJobs(queryClient),
   });
 }
+
+// The ids of every job in a filter, for "select all in this filter": at most two pages of
+// 100, the most one bulk move takes.
+export const BULK_MOVE_MAX = 200;
+export async function jobIdsInFilter(filters: JobFilters): Promise<number[]> {
+  const ids: number[] = [];
+  for (let page = 1; page <= BULK_MOVE_MAX / 100; page++) {
+    const result = await api.get<JobPage>(`/api/jobs${jobListSearch({ ...filters, page, pageSize: 100 })}`);
+    ids.push(...result.jobs.map((j) => j.id));
+    if (result.jobs.length < 100) break;
+  }
+  return ids;
+}
