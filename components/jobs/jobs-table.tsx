@@ -1,10 +1,11 @@
 import { useRouter } from 'expo-router';
-import { useCallback, useMemo, useRef, useState } from 'react';
-import { Pressable, StyleSheet, View } from 'react-native';
+import { useMemo } from 'react';
+import { View } from 'react-native';
 
+import { useRowSelection } from '@/components/lib/use-row-selection';
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
-import { Text } from '@/components/ui/text';
-import { CARDS_BELOW, colors, fonts, space } from '@/components/ui/theme';
+import { SelectBox } from '@/components/ui/select-box';
+import { CARDS_BELOW, space } from '@/components/ui/theme';
 import {
   JOB_SORT_DEFAULT_DIR,
   type JobSort,
@@ -41,19 +42,8 @@ export function JobsTable({
   idsInFilter?: () => Promise<number[]>;
 }) {
   const router = useRouter();
-  const [selected, setSelected] = useState<number[]>([]);
-  const lastClicked = useRef<number | null>(null);
-  const toggle = useCallback(
-    (id: number, on: boolean, range: boolean) => {
-      const ids = jobs.map((j) => j.id);
-      const from = lastClicked.current === null ? -1 : ids.indexOf(lastClicked.current);
-      const to = ids.indexOf(id);
-      const span = range && from >= 0 ? ids.slice(Math.min(from, to), Math.max(from, to) + 1) : [id];
-      lastClicked.current = id;
-      setSelected((current) => (on ? [...new Set([...current, ...span])] : current.filter((s) => !span.includes(s))));
-    },
-    [jobs],
-  );
+  const ids = useMemo(() => jobs.map((j) => j.id), [jobs]);
+  const { selected, setSelected, toggle } = useRowSelection(ids);
   const selectColumn = useMemo<DataTableColumn<JobSummary>>(
     () => ({
       id: 'select',
@@ -127,27 +117,3 @@ export function JobsTable({
     </View>
   );
 }
-
-// A row's tick box; the click's shift key is passed on for range selection.
-function SelectBox({ label, checked, onToggle }: { label: string; checked: boolean; onToggle: (on: boolean, shift: boolean) => void }) {
-  return (
-    <Pressable
-      role="checkbox"
-      aria-checked={checked}
-      accessibilityLabel={label}
-      onPress={(e) => {
-        e.stopPropagation?.();
-        onToggle(!checked, Boolean((e.nativeEvent as unknown as { shiftKey?: boolean }).shiftKey));
-      }}
-      style={[styles.box, checked && styles.boxOn]}
-    >
-      {checked ? <Text style={styles.tick}>✓</Text> : null}
-    </Pressable>
-  );
-}
-
-const styles = StyleSheet.create({
-  box: { width: 24, height: 24, borderWidth: 2, borderColor: colors.ink, borderRadius: 4, alignItems: 'center', justifyContent: 'center' },
-  boxOn: { backgroundColor: colors.ink },
-  tick: { color: colors.surface, fontFamily: fonts.bold, fontSize: 14 },
-});

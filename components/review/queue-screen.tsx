@@ -4,23 +4,26 @@ import { useMemo, useState } from 'react';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { useKeyboard } from '@/components/lib/use-keyboard';
+import { useRowSelection } from '@/components/lib/use-row-selection';
 import { useClaimMutation } from '@/components/queries/claims';
 import { useQueueQuery } from '@/components/queries/queue';
 import { useSessionQuery } from '@/components/queries/session';
 import { useTechniciansQuery } from '@/components/queries/technicians';
 import { DisputesPanel } from '@/components/rework/disputes-panel';
 import { Button } from '@/components/ui/button';
-import { DataTable } from '@/components/ui/data-table';
+import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
 import { HelpOverlay } from '@/components/ui/help-overlay';
 import { Notice } from '@/components/ui/notice';
 import { pageCount, Pager } from '@/components/ui/pager';
 import { Screen } from '@/components/ui/screen';
+import { SelectBox } from '@/components/ui/select-box';
 import { Text } from '@/components/ui/text';
 import { CARDS_BELOW, colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { JOB_STATUS_LABELS } from '@/shared/jobs';
 import { QUEUE_PARAM_KEYS, type QueueParams, queueSearch } from '@/shared/queue-params';
 import type { QueueRow, QueueSort } from '@/shared/review';
 
+import { MoveClaims } from './move-claims';
 import { QUEUE_HIDDEN_BY_DEFAULT, queueColumns } from './queue-columns';
 import { QueueFilters } from './queue-filters';
 import { ReassignPanel } from './reassign-panel';
@@ -91,7 +94,28 @@ export function QueueScreen() {
   const sorting: SortingState = params.sort ? [{ id: params.sort === 'claim' ? 'claim' : params.sort, desc: params.dir === 'desc' }] : [];
   // Due times are shown relative to when the page was fetched.
   const fetchedAt = queue.dataUpdatedAt;
-  const columns = useMemo(() => queueColumns(new Date(fetchedAt), me?.id), [me?.id, fetchedAt]);
+  const manager = me?.role === 'manager';
+  const ids = useMemo(() => rows.map((r) => r.id), [rows]);
+  const picked = useRowSelection(ids);
+  const columns = useMemo(() => {
+    const base = queueColumns(new Date(fetchedAt), me?.id);
+    if (!manager) return base;
+    // Managers tick records to give them to a reviewer together.
+    const tick: DataTableColumn<QueueRow> = {
+      id: 'select',
+      header: 'Select',
+      enableSorting: false,
+      meta: { width: 80 },
+      cell: ({ row }) => (
+        <SelectBox
+          label={`Select ${row.original.claimReference}`}
+          checked={picked.selected.includes(row.original.id)}
+          onToggle={(on, shift) => picked.toggle(row.original.id, on, shift)}
+        />
+      ),
+    };
+    return [tick, ...base];
+  }, [me?.id, fetchedAt, manager, picked.selected, picked.toggle]);
   const counts = queue.data?.counts ?? {};
 
   return (
@@ -108,6 +132,7 @@ export function QueueScreen() {
       <QueueFilters params={params} technicians={technicians.data ?? []} onChange={setParams} />
       {queue.error ? <Notice tone="error">{queue.error.message}</Notice> : null}
       {claim.error ? <Notice tone="error">{claim.error.message}</Notice> : null}
+      {manager ? <MoveClaims selected={picked.selected} onClear={() => picked.setSelected([])} /> : null}
       <DataTable
         label="Review queue"
         columns={columns}
@@ -144,7 +169,7 @@ export function QueueScreen() {
       ) : null}
       {isReviewer ? <SecondReviewList /> : null}
       {me?.role === 'manager' ? <DisputesPanel /> : null}
-      {me?.role === 'manager' ? <ReassignPanel /> : null}
+      {manager ? <ReassignPanel /> : null}
       <HelpOverlay visible={help} title="Queue keys" keys={KEYS} onClose={() => setHelp(false)} />
     </Screen>
   );

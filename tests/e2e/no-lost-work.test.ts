@@ -108,9 +108,15 @@ describe('on a phone (390 × 844)', () => {
     await expect(page.getByLabel('Room name').inputValue()).resolves.toBe('Crawl-space stair');
 
     await browser.setOffline(false);
-    await status(page)
-      .filter({ hasText: /^Saved \d/ })
-      .waitFor({ timeout: 30_000 });
+    try {
+      await status(page)
+        .filter({ hasText: /^Saved \d/ })
+        .waitFor({ timeout: 30_000 });
+    } catch (error) {
+      // What the phone showed, for whoever reads the failure.
+      await screenshot(page, 'no-lost-work-not-synced-phone');
+      throw error;
+    }
     const saved = await serverDraft(jobId);
     expect(saved.record.rooms.map((r) => r.name)).toEqual(['Crawl-space stair']);
   });
@@ -150,7 +156,7 @@ describe('on a phone (390 × 844)', () => {
     await openJob(page, jobId, claimReference);
     await browser.setOffline(true);
     const chooser = page.waitForEvent('filechooser');
-    await page.getByRole('button', { name: 'Choose a file and upload' }).click();
+    await page.getByRole('button', { name: 'Choose photos and upload' }).click();
     await (await chooser).setFiles({ name: 'attic-stain.png', mimeType: 'image/png', buffer: PNG_1X1 });
     await page.getByText('Kept on this phone; it uploads when the connection returns.').waitFor();
     await browser.setOffline(false);
@@ -164,7 +170,7 @@ describe('on a phone (390 × 844)', () => {
     const jobId = await draftJob(api, { technician: 'tess.', claimReference, dueInHours: 48 });
     await openJob(page, jobId, claimReference);
     const chooser = page.waitForEvent('filechooser');
-    await page.getByRole('button', { name: 'Choose a file and upload' }).click();
+    await page.getByRole('button', { name: 'Choose photos and upload' }).click();
     await (await chooser).setFiles({ name: 'huge.jpg', mimeType: 'image/jpeg', buffer: Buffer.alloc(Math.round(30.2 * 1024 * 1024), 1) });
     await page.getByText('Photos up to 25 MB; this one is 30.2 MB.').waitFor();
     await expect(page.getByRole('button', { name: 'Retry upload' }).count()).resolves.toBe(0);

@@ -4,7 +4,8 @@ import type { BrowserContext, Page } from 'playwright-core';
 
 import { DEMO_PASSWORD } from '../../seeders/data/demo-people';
 import { BASE_URL, DESKTOP, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
-import { demoPerson, draftJob } from '../helpers/e2e-api';
+import { demoPerson, draftJob, submittedJob } from '../helpers/e2e-api';
+import { completeRecord } from '../helpers/records';
 
 jest.setTimeout(120_000);
 
@@ -119,5 +120,27 @@ describe('bulk moves', () => {
     await page.getByText(`3 jobs moved to ${demoPerson('wren.').name}.`).waitFor();
     for (const ref of refs) await page.getByRole('row', { name: new RegExp(`${ref}.*${demoPerson('wren.').name}`) }).waitFor();
     await screenshot(page, 'jobs-bulk-moved-desktop');
+  });
+
+  it('lets a manager tick two queued records and give them to one reviewer, who is told once', async () => {
+    const stamp = Date.now().toString(36).toUpperCase();
+    const refs = [1, 2].map((n) => `GIVE-${stamp}-${n}`);
+    const setup = await launchBrowser(DESKTOP);
+    try {
+      for (const ref of refs)
+        await submittedJob(setup.request, { technician: 'wren.', claimReference: ref, dueInHours: 30, record: completeRecord() });
+    } finally {
+      await setup.close();
+    }
+    const opened = await openAs(DESKTOP, 'mara.', `/queue?q=GIVE-${stamp}`);
+    browser = opened.browser;
+    const { page } = opened;
+    await page.getByRole('checkbox', { name: `Select ${refs[0]}` }).click();
+    await page.getByRole('checkbox', { name: `Select ${refs[1]}` }).click({ modifiers: ['Shift'] });
+    await page.getByLabel('Give to reviewer').selectOption({ label: demoPerson('hana.').name });
+    await page.getByRole('button', { name: `Give 2 to ${demoPerson('hana.').name}` }).click();
+    await page.getByText(`2 records given to ${demoPerson('hana.').name}.`).waitFor();
+    for (const ref of refs) await page.getByRole('row', { name: new RegExp(`${ref}.*${demoPerson('hana.').name}`) }).waitFor();
+    await screenshot(page, 'queue-claims-given-desktop');
   });
 });
