@@ -34,7 +34,7 @@ export function ConflictPanel({ mine, theirs, onKeepMine, onUseTheirs }: Props) 
         {differences.length ? `${differences.length} difference(s): saved version → yours` : 'The two versions hold the same facts.'}
       </Text>
       {differences.slice(0, 12).map((d) => (
-        <Text key={`${d.path}-${d.kind}`} variant="small">{`${d.path}: ${d.before} → ${d.after}`}</Text>
+        <Text key={`${d.path}-${d.kind}`} variant="small">{`${d.label}: saved ${d.before}, yours ${d.after}`}</Text>
       ))}
       {differences.length > 12 ? <Text variant="small">{`…and ${differences.length - 12} more.`}</Text> : null}
       <View style={styles.actions}>

@@ -8,6 +8,7 @@ import { deviceKey, readDevice, removeDevice, writeDevice } from '@/components/d
 import { useOnline } from '@/components/device/use-online';
 import { ApiError } from '@/components/lib/api-client';
 import type { CaptureRecord } from '@/shared/capture-record';
+import { diffRevisions } from '@/shared/revision-diff';
 
 import type { FormValues } from './form-values';
 import { toFormFields, withoutRefused } from './server-fields';
@@ -70,11 +71,23 @@ export function useRecordSync({ jobId, userId, server, values, toRecord, saveRec
     kept.current = await writeDevice(key, local);
   }, [key]);
 
-  const enterConflict = useCallback((theirs: DraftVersion) => {
-    inConflict.current = true;
-    setMine(latest.current);
-    setStatus({ kind: 'conflict', theirs });
-  }, []);
+  const enterConflict = useCallback(
+    (theirs: DraftVersion) => {
+      // The other save holds the same facts as this phone (the same edit arrived twice, e.g. a
+      // save that reached the server while the phone thought it offline): nothing to choose.
+      if (diffRevisions({ record: theirs.record, files: [] }, { record: toRecord(latest.current), files: [] }).length === 0) {
+        baseVersion.current = theirs.version;
+        changes.current = 0;
+        void removeDevice(key);
+        setStatus({ kind: 'saved', savedAt: theirs.savedAt });
+        return;
+      }
+      inConflict.current = true;
+      setMine(latest.current);
+      setStatus({ kind: 'conflict', theirs });
+    },
+    [key, toRecord],
+  );
 
   const sendOnce = useCallback(async () => {
     const sentSerial = JSON.stringify(latest.current);

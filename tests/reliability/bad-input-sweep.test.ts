@@ -46,6 +46,10 @@ const INPUTLESS = new Set([
   'POST /api/outbox/:id/retry',
   'DELETE /api/jobs/:id/files/:fileId',
   'GET /api/jobs/:id/workspace',
+  // Its input is an optional queue filter; unknown parameters are ignored, so a request
+  // without a bad value is a valid one, and claiming the next record is its job.
+  'POST /api/queue/claim-next',
+  'POST /api/notifications/read-all',
 ]);
 
 // Values a careless or hostile client sends where a field is expected.

@@ -40,6 +40,7 @@ async function rowsOf(sql: string) {
     .sort((a, b) => JSON.stringify(a).localeCompare(JSON.stringify(b)));
 }
 
+// Dozens of decisions, each with its timeline, e-mail and notices: more than the default 5 s.
 it(`equals the raw aggregates after a random series of decisions (seed ${SEED})`, async () => {
   const technicians = await Promise.all([1, 2, 3].map(() => createUser({ role: 'technician' })));
   const { agent, user: reviewer } = await signedInAgent(app, 'reviewer');
@@ -104,4 +105,4 @@ it(`equals the raw aggregates after a random series of decisions (seed ${SEED})`
     expect({ table: source.table, rows: rollup }).toEqual({ table: source.table, rows: raw });
     if (source.table === 'trend_technician_weeks') expect(raw.length).toBeGreaterThan(10);
   }
-});
+}, 30_000);
