@@ -4,7 +4,7 @@ import { View } from 'react-native';
 
 import { useRowSelection } from '@/components/lib/use-row-selection';
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
-import { SelectBox } from '@/components/ui/select-box';
+import { selectColumn } from '@/components/ui/select-box';
 import { CARDS_BELOW, space } from '@/components/ui/theme';
 import {
   JOB_SORT_DEFAULT_DIR,
@@ -44,22 +44,7 @@ export function JobsTable({
   const router = useRouter();
   const ids = useMemo(() => jobs.map((j) => j.id), [jobs]);
   const { selected, setSelected, toggle } = useRowSelection(ids);
-  const selectColumn = useMemo<DataTableColumn<JobSummary>>(
-    () => ({
-      id: 'select',
-      header: 'Select',
-      enableSorting: false,
-      meta: { width: 80 },
-      cell: ({ row }) => (
-        <SelectBox
-          label={`Select ${row.original.claimReference}`}
-          checked={selected.includes(row.original.id)}
-          onToggle={(on, shift) => toggle(row.original.id, on, shift)}
-        />
-      ),
-    }),
-    [selected, toggle],
-  );
+  const tickColumn = useMemo(() => selectColumn<JobSummary>(selected, toggle), [selected, toggle]);
   const columns = useMemo<DataTableColumn<JobSummary>[]>(
     () => [
       { id: 'claim', accessorKey: 'claimReference', header: 'Claim', meta: { width: 140 } },
@@ -88,7 +73,7 @@ export function JobsTable({
     [],
   );
   const current = sort ?? 'due';
-  const shown = useMemo(() => (selectable ? [selectColumn, ...columns] : columns), [selectable, selectColumn, columns]);
+  const shown = useMemo(() => (selectable ? [tickColumn, ...columns] : columns), [selectable, tickColumn, columns]);
   return (
     <View style={{ gap: space.sm }}>
       {selectable ? (

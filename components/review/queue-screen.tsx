@@ -11,12 +11,12 @@ import { useSessionQuery } from '@/components/queries/session';
 import { useTechniciansQuery } from '@/components/queries/technicians';
 import { DisputesPanel } from '@/components/rework/disputes-panel';
 import { Button } from '@/components/ui/button';
-import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
+import { DataTable } from '@/components/ui/data-table';
 import { HelpOverlay } from '@/components/ui/help-overlay';
 import { Notice } from '@/components/ui/notice';
 import { pageCount, Pager } from '@/components/ui/pager';
 import { Screen } from '@/components/ui/screen';
-import { SelectBox } from '@/components/ui/select-box';
+import { selectColumn } from '@/components/ui/select-box';
 import { Text } from '@/components/ui/text';
 import { CARDS_BELOW, colors, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { JOB_STATUS_LABELS } from '@/shared/jobs';
@@ -55,7 +55,7 @@ export function QueueScreen() {
   const isReviewer = me?.role === 'reviewer';
   const wide = useWindowDimensions().width >= WIDE_BREAKPOINT;
 
-  const rows = queue.data?.rows ?? [];
+  const rows = useMemo(() => queue.data?.rows ?? [], [queue.data]);
   const page = queue.data?.page ?? 1;
   const pages = queue.data ? pageCount(queue.data.total, queue.data.pageSize) : 1;
   const setParams = (changes: QueueParams) => router.setParams(changes as never);
@@ -101,20 +101,7 @@ export function QueueScreen() {
     const base = queueColumns(new Date(fetchedAt), me?.id);
     if (!manager) return base;
     // Managers tick records to give them to a reviewer together.
-    const tick: DataTableColumn<QueueRow> = {
-      id: 'select',
-      header: 'Select',
-      enableSorting: false,
-      meta: { width: 80 },
-      cell: ({ row }) => (
-        <SelectBox
-          label={`Select ${row.original.claimReference}`}
-          checked={picked.selected.includes(row.original.id)}
-          onToggle={(on, shift) => picked.toggle(row.original.id, on, shift)}
-        />
-      ),
-    };
-    return [tick, ...base];
+    return [selectColumn<QueueRow>(picked.selected, picked.toggle), ...base];
   }, [me?.id, fetchedAt, manager, picked.selected, picked.toggle]);
   const counts = queue.data?.counts ?? {};
 

@@ -1,6 +1,7 @@
 // A row's tick box in a table or card; the click's shift key is passed on for range selection.
 import { Pressable, StyleSheet } from 'react-native';
 
+import type { DataTableColumn } from './data-table';
 import { Text } from './text';
 import { colors, fonts } from './theme';
 
@@ -34,3 +35,23 @@ const styles = StyleSheet.create({
   boxOn: { backgroundColor: colors.ink },
   tick: { color: colors.surface, fontFamily: fonts.bold, fontSize: 14 },
 });
+
+// The tick-box column of a table whose rows are jobs (Jobs, Queue), named by claim reference.
+export function selectColumn<T extends { id: number; claimReference: string }>(
+  selected: number[],
+  toggle: (id: number, on: boolean, shift: boolean) => void,
+): DataTableColumn<T> {
+  return {
+    id: 'select',
+    header: 'Select',
+    enableSorting: false,
+    meta: { width: 80 },
+    cell: ({ row }) => (
+      <SelectBox
+        label={`Select ${row.original.claimReference}`}
+        checked={selected.includes(row.original.id)}
+        onToggle={(on, shift) => toggle(row.original.id, on, shift)}
+      />
+    ),
+  };
+}
