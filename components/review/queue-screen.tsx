@@ -135,7 +135,11 @@ export function QueueScreen() {
         }
         cardsBelow={CARDS_BELOW}
         rowLabel={(r) => r.claimReference}
-        columnChoice={{ storageKey: 'queue', hiddenByDefault: QUEUE_HIDDEN_BY_DEFAULT }}
+        columnChoice={{
+          storageKey: 'queue',
+          // A manager's queue has the tick-box column too: Loss makes room for it at 1440 px.
+          hiddenByDefault: manager ? [...QUEUE_HIDDEN_BY_DEFAULT, 'lossType'] : QUEUE_HIDDEN_BY_DEFAULT,
+        }}
       />
       <Pager
         page={page}

@@ -45,7 +45,7 @@ export function selectColumn<T extends { id: number; claimReference: string }>(
     id: 'select',
     header: 'Select',
     enableSorting: false,
-    meta: { width: 80 },
+    meta: { width: 64 },
     cell: ({ row }) => (
       <SelectBox
         label={`Select ${row.original.claimReference}`}

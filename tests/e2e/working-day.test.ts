@@ -118,6 +118,7 @@ describe('bulk moves', () => {
     await page.getByLabel('Move to technician').selectOption({ label: demoPerson('wren.').name });
     await page.getByRole('button', { name: 'Move 3 jobs' }).click();
     await page.getByText(`3 jobs moved to ${demoPerson('wren.').name}.`).waitFor();
+    for (const [header, right] of await headerEdges(page, 'Jobs')) expect([header, right <= DESKTOP.width]).toEqual([header, true]);
     for (const ref of refs) await page.getByRole('row', { name: new RegExp(`${ref}.*${demoPerson('wren.').name}`) }).waitFor();
     await screenshot(page, 'jobs-bulk-moved-desktop');
   });
@@ -140,6 +141,8 @@ describe('bulk moves', () => {
     await page.getByLabel('Give to reviewer').selectOption({ label: demoPerson('hana.').name });
     await page.getByRole('button', { name: `Give 2 to ${demoPerson('hana.').name}` }).click();
     await page.getByText(`2 records given to ${demoPerson('hana.').name}.`).waitFor();
+    // With the tick-box column, the manager's queue still fits the screen.
+    for (const [header, right] of await headerEdges(page, 'Review queue')) expect([header, right <= DESKTOP.width]).toEqual([header, true]);
     for (const ref of refs) await page.getByRole('row', { name: new RegExp(`${ref}.*${demoPerson('hana.').name}`) }).waitFor();
     await screenshot(page, 'queue-claims-given-desktop');
   });
