@@ -65,7 +65,17 @@ export const GAP_CAUSE_LABELS: Record<GapCause, string> = {
   other: 'Other',
 };
 
-export const HAZARDS = ['standing_water', 'live_wiring', 'unsafe_attic_decking', 'mould', 'roof_access'] as const;
+export const HAZARDS = [
+  'standing_water',
+  'live_wiring',
+  'unsafe_attic_decking',
+  'mould',
+  'roof_access',
+  'fire_structure',
+  'soot',
+  'crawl_space_entry',
+  'ladders',
+] as const;
 export type Hazard = (typeof HAZARDS)[number];
 export const HAZARD_LABELS: Record<Hazard, string> = {
   standing_water: 'Standing water',
@@ -73,6 +83,10 @@ export const HAZARD_LABELS: Record<Hazard, string> = {
   unsafe_attic_decking: 'Unsafe attic decking',
   mould: 'Mould',
   roof_access: 'Roof access',
+  fire_structure: 'Fire-weakened structure',
+  soot: 'Soot and ash',
+  crawl_space_entry: 'Crawl-space entry',
+  ladders: 'Ladders',
 };
 
 export type ReflectiveCount = { kind: ReflectiveKind; found: number; flagged: number };

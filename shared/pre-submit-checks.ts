@@ -10,8 +10,10 @@ import {
   roomAreaM2,
   roomStationSum,
 } from './capture-record';
+import { planWarnings } from './plan-record';
 import { expectedStations, MAX_STATION_SPACING_M } from './station-spacing';
 import { AREA_LABEL, fromMetres, fromSquareMetres, roundTo } from './units';
+import type { VisitPlan } from './visit-plan';
 
 export type Finding = { field: string; message: string };
 export type CheckResult = { missing: Finding[]; warnings: Finding[] };
@@ -21,6 +23,8 @@ export type CheckResult = { missing: Finding[]; warnings: Finding[] };
 export type CheckContext = {
   previousSubmittedAt?: string | null;
   stationFileLevels?: { level: LevelKind; stations: number }[] | null;
+  // The visit plan, when one was made: what it expected and the record lacks is a warning.
+  plan?: VisitPlan | null;
 };
 
 // A processing confirmation counts only for the revision it was made for: one made before
@@ -144,5 +148,6 @@ export function checkCaptureRecord(record: CaptureRecord, context: CheckContext 
     }
   });
 
+  warnings.push(...planWarnings(record, context.plan ?? null));
   return { missing, warnings };
 }
