@@ -18,6 +18,7 @@ import { Session } from './session';
 import { ShareLink } from './share-link';
 import { StoredFile } from './stored-file';
 import { User } from './user';
+import { CameraClassSetting, VisitPlanRow } from './visit-plan';
 
 User.initModel(sequelize);
 Session.initModel(sequelize);
@@ -38,6 +39,8 @@ ShareLink.initModel(sequelize);
 Delivery.initModel(sequelize);
 Notification.initModel(sequelize);
 NotificationPref.initModel(sequelize);
+VisitPlanRow.initModel(sequelize);
+CameraClassSetting.initModel(sequelize);
 
 Job.belongsTo(User, { as: 'technician', foreignKey: 'technicianId' });
 Job.belongsTo(User, { as: 'createdBy', foreignKey: 'createdById' });
@@ -53,6 +56,7 @@ AuditEvent.belongsTo(User, { as: 'actor', foreignKey: 'actorId' });
 
 export {
   AuditEvent,
+  CameraClassSetting,
   CaptureDraft,
   CaptureRevision,
   Delivery,
@@ -72,4 +76,5 @@ export {
   ShareLink,
   StoredFile,
   User,
+  VisitPlanRow,
 };

@@ -18,6 +18,7 @@ import { shareRouter } from './share';
 import { techniciansRouter } from './technicians';
 import { trendsRouter } from './trends';
 import { usersRouter } from './users';
+import { visitPlansRouter } from './visit-plans';
 
 // Every API router and where it is mounted. The route-access test walks this list, so a
 // new route cannot ship without an entry in its role table.
@@ -40,4 +41,5 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api', router: deliveryRouter },
   { prefix: '/api/share', router: shareRouter },
   { prefix: '/api/notifications', router: notificationsRouter },
+  { prefix: '/api', router: visitPlansRouter },
 ];

@@ -12,6 +12,7 @@ import { recordEvent } from './audit-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 import { assertReworkAnswered } from './rework-service';
 import { analyseAttachedFile } from './station-service';
+import { planOfJob } from './visit-plan-service';
 
 type Actor = Express.User;
 
@@ -84,6 +85,7 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     const findings = checkCaptureRecord(record, {
       previousSubmittedAt: last?.submittedAt.toISOString() ?? null,
       stationFileLevels: stationAnalysis?.levels.map((l) => ({ level: l.level, stations: l.registered })) ?? null,
+      plan: await planOfJob(jobId, transaction),
     });
     if (findings.missing.length > 0) {
       throw invalid(Object.fromEntries(findings.missing.map((f) => [f.field, f.message])));

@@ -6,6 +6,7 @@ import type { Role } from '../../shared/roles';
 import { claimFor, createJob, createSubmittedJob, createUser, reworkRequested, secondReviewByAnother } from '../helpers/factories';
 import { type Agent, countRows, resetSignInLimits, send, signedInAgent, type Upload } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
+import { housePlan } from '../helpers/plans';
 import { registeredRoutes } from '../helpers/route-walk';
 import { PNG_1X1 } from '../helpers/sample-files';
 
@@ -101,6 +102,29 @@ const CASES: Record<string, BadInputCase> = {
     headers: { 'If-Match': '"1"' },
     body: badRecord(),
     fields: ['cameraClass', 'exteriorStations', 'rooms.0.reflective.0', 'rooms.0.stations', 'units'],
+  },
+  'PUT /api/jobs/:id/plan': {
+    as: 'technician',
+    tables: ['visit_plans'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await createJob({ technicianId: me.id })).id}/plan` }),
+    headers: { 'If-Match': '"0"' },
+    body: {
+      ...housePlan(),
+      cameraClass: 'pinhole',
+      structures: [{ ...housePlan().structures[0], kind: 'castle', inScope: 'yes' }],
+      rooms: [{ ...housePlan().rooms[0], lengthM: -3 }],
+      hazards: ['dragons'],
+      units: ['ft'],
+    },
+    fields: ['cameraClass', 'hazards.0', 'rooms.0.lengthM', 'structures.0.inScope', 'structures.0.kind', 'units'],
+  },
+  'PUT /api/camera-classes/:cameraClass': {
+    as: 'manager',
+    tables: ['camera_class_settings'],
+    prepare: async () => ({ path: '/api/camera-classes/tripod_depth' }),
+    headers: { 'If-Match': '"0"' },
+    body: { kitItems: ['Tripod', ''], minutesPerStation: 'quick', setupMinutes: -5 },
+    fields: ['kitItems.1', 'minutesPerStation', 'setupMinutes'],
   },
   'POST /api/jobs/:id/submit': {
     as: 'technician',

@@ -6,7 +6,7 @@ import crypto from 'node:crypto';
 import type { Express } from 'express';
 
 import { createApp } from '../../server/app';
-import { Notification, OutboxMessage, PasswordToken, sequelize } from '../../server/models';
+import { CameraClassSetting, Notification, OutboxMessage, PasswordToken, sequelize } from '../../server/models';
 import { putObject } from '../../server/storage/s3';
 import { DEFAULT_RUBRIC } from '../../shared/default-rubric';
 import { type Role, ROLES } from '../../shared/roles';
@@ -26,6 +26,7 @@ import {
 } from '../helpers/factories';
 import { type Agent, clientAgent, resetSignInLimits, send, signedInAgent, type Upload } from '../helpers/http';
 import { completeRecord } from '../helpers/records';
+import { housePlan } from '../helpers/plans';
 import { registeredRoutes } from '../helpers/route-walk';
 import { PNG_1X1 } from '../helpers/sample-files';
 
@@ -91,6 +92,23 @@ const ROUTES: Record<string, RouteCase> = {
   'PUT /api/jobs/:id/record': {
     allowed: ['technician'],
     prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/record`, body: completeRecord(), headers: FIRST_SAVE }),
+  },
+  'GET /api/jobs/:id/plan': { allowed: [...ROLES], prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/plan` }) },
+  'PUT /api/jobs/:id/plan': {
+    allowed: ['technician'],
+    prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/plan`, body: housePlan(), headers: { 'If-Match': '"0"' } }),
+  },
+  'GET /api/camera-classes': { allowed: [...ROLES] },
+  'PUT /api/camera-classes/:cameraClass': {
+    allowed: ['manager'],
+    prepare: async () => {
+      const row = await CameraClassSetting.findByPk('camera_360');
+      return {
+        path: '/api/camera-classes/camera_360',
+        body: { kitItems: ['Tripod', 'Spare battery'], minutesPerStation: 1, setupMinutes: 15 },
+        headers: { 'If-Match': `"${row?.version ?? 0}"` },
+      };
+    },
   },
   'POST /api/jobs/:id/submit': {
     allowed: ['technician'],
