@@ -13,6 +13,7 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/queue', label: 'Queue', roles: ['reviewer', 'manager'] },
   { href: '/trends', label: 'Trends', roles: ['manager'] },
   { href: '/rubric', label: 'Rubric', roles: ['manager'] },
+  { href: '/kit', label: 'Kit and timing', roles: ['manager'] },
   { href: '/admin/users', label: 'Users', roles: ['admin'] },
   { href: '/mailbox', label: 'Mailbox', roles: ['admin'], openToAll: 'mailbox' },
 ];

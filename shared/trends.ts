@@ -33,6 +33,8 @@ export type TeamRow = {
   recaptures: number;
   meanRevisionsToAcceptance: number | null;
   medianHoursVisitToAcceptance: number | null;
+  // Visits with both a planned and a recorded time on site (from the visit plans).
+  visits: { timed: number; plannedMinutes: number; actualMinutes: number };
   tooFew: boolean;
 };
 

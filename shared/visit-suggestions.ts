@@ -1,8 +1,9 @@
 // What Sightline suggests from a visit plan: the models, the level to start on, the stations
 // and time to expect. Pure, so the phone suggests offline and the server checks the same way.
 import { type CameraClass, LEVEL_KINDS, LEVEL_LABELS, type LevelKind, type SplitReason } from './capture-record';
+import type { LossType } from './jobs';
 import { expectedStations, MAX_STATION_SPACING_M } from './station-spacing';
-import type { PlannedModel, PlannedRoom, PlannedStructure, VisitConditions, VisitPlan } from './visit-plan';
+import type { PlannedModel, PlannedRoom, PlannedStructure, PlanStructureKind, VisitConditions, VisitPlan } from './visit-plan';
 import { PLAN_STRUCTURE_LABELS, RECORD_STRUCTURE, STRUCTURE_LEVEL } from './visit-plan';
 import type { CameraClassSettings } from './visit-settings';
 
@@ -180,4 +181,24 @@ export function formatMinutes(minutes: number): string {
   const m = minutes % 60;
   if (h === 0) return `${m} min`;
   return m === 0 ? `${h} h` : `${h} h ${m} min`;
+}
+
+// Whether a structure is likely in the claim's scope, before the adjuster's notes are read:
+// the dwelling and its attic and crawl space always; detached structures when the loss is one
+// that reaches them (wind, hail and fire travel across a property; water and smoke usually stay
+// in the dwelling). A starting point the technician confirms, not a rule.
+export function suggestInScope(kind: PlanStructureKind, lossType: LossType): boolean {
+  if (kind === 'main_dwelling' || kind === 'attic' || kind === 'crawl_space') return true;
+  return lossType === 'wind' || lossType === 'hail' || lossType === 'fire';
+}
+
+// Planned against actual time on site over several visits, in words: the share over or under
+// the plan says whether the estimates (or the settings behind them) fit this technician.
+export function timeOnSiteText(visits: { timed: number; plannedMinutes: number; actualMinutes: number }): string {
+  if (visits.timed === 0) return 'No timed visits';
+  const share =
+    visits.plannedMinutes > 0 ? Math.round(((visits.actualMinutes - visits.plannedMinutes) / visits.plannedMinutes) * 100) : null;
+  const against =
+    share === null ? '' : share === 0 ? ', as planned' : ` (${share > 0 ? '+' : '−'}${Math.abs(share)} % ${share > 0 ? 'over' : 'under'})`;
+  return `${visits.timed} visit${visits.timed === 1 ? '' : 's'}: planned ${formatMinutes(visits.plannedMinutes)}, actual ${formatMinutes(visits.actualMinutes)}${against}`;
 }

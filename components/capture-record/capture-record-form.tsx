@@ -2,6 +2,7 @@ import { useCallback, useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
+import { ConflictPanel } from '@/components/device/conflict-panel';
 import { ApiError } from '@/components/lib/api-client';
 import { lazyView } from '@/components/lib/lazy-view';
 import { saveRecordDraft, useRecordSubmitMutation } from '@/components/queries/capture-record';
@@ -12,15 +13,18 @@ import { Text } from '@/components/ui/text';
 import { space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { type JobDetail } from '@/shared/api-types';
 import type { CaptureRecord } from '@/shared/capture-record';
+import { isUntouchedRecord, recordFromPlan } from '@/shared/plan-record';
 import { checkCaptureRecord } from '@/shared/pre-submit-checks';
+import { diffRevisions } from '@/shared/revision-diff';
 import type { LengthUnit } from '@/shared/units';
+import type { VisitPlan } from '@/shared/visit-plan';
 
-import { ConflictPanel } from './conflict-panel';
 import { DamageSection } from './damage-section';
 import { FilesSection } from './files-section';
 import { FindingsPanel } from './findings-panel';
 import { RecordFormContext } from './form-context';
 import { type FormValues, toFormValues, toRecord } from './form-values';
+import { FromPlanNotice } from './from-plan-notice';
 import { GapsSection } from './gaps-section';
 import { LevelsSection } from './levels-section';
 import { ModelsSection } from './models-section';
@@ -35,9 +39,19 @@ const StationSection = lazyView(() => import('@/components/stations/station-sect
 
 const recordOf = (values: FormValues) => toRecord(values).record;
 
-export function CaptureRecordForm({ detail, userId }: { detail: JobDetail; userId: number }) {
+type Props = { detail: JobDetail; userId: number; plan: VisitPlan | null };
+
+// A record nobody has typed into opens filled from the visit plan; that filling is saved as
+// the first change.
+function openingRecord(detail: JobDetail, plan: VisitPlan | null) {
+  const fill = plan !== null && isUntouchedRecord(detail.record) && (plan.structures.length > 0 || plan.rooms.length > 0);
+  return { record: fill ? recordFromPlan(plan, detail.record) : detail.record, filled: fill };
+}
+
+export function CaptureRecordForm({ detail, userId, plan }: Props) {
   const jobId = detail.job.id;
-  const form = useForm<FormValues>({ defaultValues: toFormValues(detail.record) });
+  const [opening] = useState(() => openingRecord(detail, plan));
+  const form = useForm<FormValues>({ defaultValues: toFormValues(opening.record) });
   const values = useWatch({ control: form.control }) as FormValues;
   const conversion = useMemo(() => toRecord(values), [values]);
   // The record is checked against the attached station file's counts, and a resubmission
@@ -50,8 +64,8 @@ export function CaptureRecordForm({ detail, userId }: { detail: JobDetail; userI
     [stations.data],
   );
   const findings = useMemo(
-    () => checkCaptureRecord(conversion.record, { previousSubmittedAt, stationFileLevels }),
-    [conversion.record, previousSubmittedAt, stationFileLevels],
+    () => checkCaptureRecord(conversion.record, { previousSubmittedAt, stationFileLevels, plan }),
+    [conversion.record, previousSubmittedAt, stationFileLevels, plan],
   );
   const [serverErrors, setServerErrors] = useState<Record<string, string>>({});
   const submit = useRecordSubmitMutation(jobId);
@@ -66,6 +80,7 @@ export function CaptureRecordForm({ detail, userId }: { detail: JobDetail; userI
     toRecord: recordOf,
     saveRecord,
     replaceValues,
+    startsChanged: opening.filled,
   });
 
   // Switching units re-expresses the typed sizes in the new unit; the stored SI values do not change.
@@ -114,12 +129,14 @@ export function CaptureRecordForm({ detail, userId }: { detail: JobDetail; userI
           <SaveStatus status={sync.status} problems={Object.keys(errors).length} />
           {sync.status.kind === 'conflict' && sync.mine ? (
             <ConflictPanel
-              mine={recordOf(sync.mine)}
-              theirs={sync.status.theirs}
+              what="record"
+              differences={diffRevisions({ record: sync.status.theirs.record, files: [] }, { record: recordOf(sync.mine), files: [] })}
+              savedAt={sync.status.theirs.savedAt}
               onKeepMine={() => void sync.keepMine()}
               onUseTheirs={() => sync.status.kind === 'conflict' && void sync.useTheirs(toFormValues(sync.status.theirs.record))}
             />
           ) : null}
+          {plan ? <FromPlanNotice record={conversion.record} plan={plan} filled={opening.filled} /> : null}
           <CameraSection onUnitsChange={changeUnits} />
           <LevelsSection />
           <RoomsSection />

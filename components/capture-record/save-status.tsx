@@ -1,10 +1,9 @@
 // The save status, always in view on a phone (it sticks to the top while the form scrolls).
 import { StyleSheet, View } from 'react-native';
 
+import { describeSync, type SyncStatus } from '@/components/device/use-draft-sync';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
-
-import { describeSync, type SyncStatus } from './use-record-sync';
 
 const TONE: Record<SyncStatus['kind'], string> = {
   saved: colors.pass,

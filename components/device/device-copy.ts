@@ -25,3 +25,9 @@ export async function withDeviceCopy<T>(path: string, load: () => Promise<T>): P
     throw error;
   }
 }
+
+// After a save, the kept copy of a page is brought up to date, so the page opens offline at
+// the version the server now holds.
+export async function refreshDeviceCopy(path: string, value: unknown): Promise<void> {
+  if (currentUserId !== null) await writeDevice(deviceKey.copy(currentUserId, path), value);
+}

@@ -49,6 +49,7 @@ export const deviceKey = {
   user: 'session:user',
   copy: (userId: number, path: string) => `copy:${userId}:${path}`,
   draft: (userId: number, jobId: number) => `draft:${userId}:${jobId}`,
+  plan: (userId: number, jobId: number) => `plan:${userId}:${jobId}`,
   upload: (userId: number, id: string) => `upload:${userId}:${id}`,
   uploadPrefix: (userId: number) => `upload:${userId}:`,
 };

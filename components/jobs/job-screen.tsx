@@ -14,6 +14,8 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
+import { PlanCard } from '@/components/visit-plan/plan-card';
+import { useLatestPlan } from '@/components/visit-plan/use-latest-plan';
 import { EDITABLE_STATUSES, JOB_STATUS_LABELS, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
 
 import { AssignmentPanel } from './assignment-panel';
@@ -32,6 +34,7 @@ export function JobScreen({ id }: { id: number }) {
   const [chosen, setChosen] = useState<number | null>(null);
   const shown = chosen ?? latest;
   const revision = useRevisionQuery(id, shown);
+  const plan = useLatestPlan(id, user?.id ?? null);
 
   if (query.error)
     return (
@@ -71,8 +74,12 @@ export function JobScreen({ id }: { id: number }) {
           files={query.data.files}
         />
       ) : null}
+      <PlanCard jobId={job.id} plan={plan.plan} canPlan={canEdit} />
+      {canEdit && !plan.ready ? <Text variant="muted">Loading the visit plan…</Text> : null}
       {canEdit ? (
-        <CaptureRecordForm key={job.id} detail={query.data} userId={user.id} />
+        plan.ready ? (
+          <CaptureRecordForm key={job.id} detail={query.data} userId={user.id} plan={plan.plan} />
+        ) : null
       ) : (
         <View style={{ gap: space.md }}>
           {latest === null ? (

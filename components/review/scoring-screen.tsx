@@ -4,10 +4,12 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 
 import { lazyView } from '@/components/lib/lazy-view';
 import { useSessionQuery } from '@/components/queries/session';
+import { usePlanQuery } from '@/components/queries/visit-plan';
 import { HelpOverlay } from '@/components/ui/help-overlay';
 import { Notice } from '@/components/ui/notice';
 import { Section } from '@/components/ui/section';
 import { space, WIDE_BREAKPOINT } from '@/components/ui/theme';
+import { PlanCard } from '@/components/visit-plan/plan-card';
 import type { Workspace } from '@/shared/review';
 
 import { ChangesPanel } from './changes-panel';
@@ -18,6 +20,13 @@ import { useScoreSheet } from './use-score-sheet';
 import { SCORING_KEYS, useScoringKeys } from './use-scoring-keys';
 
 const StationPlot = lazyView(() => import('@/components/stations/station-plot').then((m) => m.StationPlot), 'the station plan');
+
+// The technician's visit plan beside the record, collapsed: what was meant to be captured.
+function JobPlan({ jobId }: { jobId: number }) {
+  const plan = usePlanQuery(jobId);
+  if (!plan.data) return null;
+  return <PlanCard jobId={jobId} plan={plan.data.version > 0 ? plan.data.plan : null} canPlan={false} />;
+}
 
 export function ScoringScreen({ workspace, onDecided }: { workspace: Workspace; onDecided: (message: string) => void }) {
   const { data: me } = useSessionQuery();
@@ -51,6 +60,7 @@ export function ScoringScreen({ workspace, onDecided }: { workspace: Workspace; 
             <ChangesPanel previous={workspace.previous} currentRevision={revision.number} files={revision.files} />
           ) : null}
           <RevisionPanel revision={revision} />
+          <JobPlan jobId={job.id} />
           {revision.stationAnalysis ? (
             <Section title="Station layout" summary="Computed by Sightline from the station file">
               <StationPlot analysis={revision.stationAnalysis} units={revision.record.units} />

@@ -4,6 +4,7 @@ import { useMemo } from 'react';
 import { DataTable, type DataTableColumn } from '@/components/ui/data-table';
 import { Text } from '@/components/ui/text';
 import type { TeamRow } from '@/shared/trends';
+import { timeOnSiteText } from '@/shared/visit-suggestions';
 
 import { formatRate, intervalText } from './format';
 
@@ -62,6 +63,13 @@ export function TeamTable({ rows, weeks }: { rows: TeamRow[]; weeks: string }) {
             {row.original.medianHoursVisitToAcceptance === null ? '–' : `${Math.round(row.original.medianHoursVisitToAcceptance)} h median`}
           </Text>
         ),
+      },
+      {
+        id: 'timeOnSite',
+        accessorFn: (r) => r.visits.timed,
+        header: 'Time on site, planned vs actual',
+        meta: { width: 230 },
+        cell: ({ row }) => <Text variant="small">{timeOnSiteText(row.original.visits)}</Text>,
       },
     ],
     [],

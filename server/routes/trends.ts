@@ -89,6 +89,9 @@ trendsRouter.get('/team', requireRole('manager'), validate(...periodRules), asyn
       recaptures: r.recaptures,
       mean_revisions_to_acceptance: r.meanRevisionsToAcceptance?.toFixed(2) ?? '',
       median_hours_visit_to_acceptance: r.medianHoursVisitToAcceptance ?? '',
+      timed_visits: r.visits.timed,
+      planned_minutes_on_site: r.visits.plannedMinutes,
+      actual_minutes_on_site: r.visits.actualMinutes,
       too_few_reviews: r.tooFew ? 'yes' : 'no',
     })),
   );

@@ -19,9 +19,15 @@ visitPlansRouter.get('/jobs/:id/plan', anyone, validate(jobId), async (req, res)
   res.json(await getPlan(req.user!, Number(req.params.id)));
 });
 
-visitPlansRouter.put('/jobs/:id/plan', requireRole('technician'), requireBaseVersion, validate(jobId, ...visitPlanRules), async (req, res) => {
-  res.json(await savePlan(req.user!, Number(req.params.id), req.body as VisitPlan, req.baseVersion!));
-});
+visitPlansRouter.put(
+  '/jobs/:id/plan',
+  requireRole('technician'),
+  requireBaseVersion,
+  validate(jobId, ...visitPlanRules),
+  async (req, res) => {
+    res.json(await savePlan(req.user!, Number(req.params.id), req.body as VisitPlan, req.baseVersion!));
+  },
+);
 
 visitPlansRouter.get('/camera-classes', anyone, async (_req, res) => {
   res.json({ cameraClasses: await listCameraClassSettings() });

@@ -117,7 +117,7 @@ export async function technicianTrends(f: Filters): Promise<TechnicianTrends> {
 
 export async function teamTable(f: Filters): Promise<TeamRow[]> {
   const { where, params } = rollupWhere({ ...f, technicianId: undefined });
-  const [technicians, sums, hours] = await Promise.all([
+  const [technicians, sums, hours, visits] = await Promise.all([
     User.findAll({ where: { role: 'technician', active: true }, attributes: ['id', 'name'], order: [['name', 'ASC']] }),
     select<Totals & { technician_id: number }>(
       `SELECT t.technician_id, ${TOTALS} FROM trend_technician_weeks t WHERE ${where} GROUP BY t.technician_id`,
@@ -128,8 +128,18 @@ export async function teamTable(f: Filters): Promise<TeamRow[]> {
        GROUP BY t.technician_id, t.hours`,
       params,
     ),
+    // Planned against actual time on site, over the plans made in the period.
+    select<{ technician_id: number; n: unknown; planned: unknown; actual: unknown }>(
+      `SELECT j.technician_id, COUNT(*) AS n, SUM(v.planned_minutes) AS planned, SUM(v.actual_minutes) AS actual
+       FROM visit_plans v JOIN jobs j ON j.id = v.job_id
+       WHERE v.planned_minutes IS NOT NULL AND v.actual_minutes IS NOT NULL
+         AND v.created_at >= :from AND v.created_at < DATE_ADD(:to, INTERVAL 1 DAY)
+       GROUP BY j.technician_id`,
+      { from: f.from, to: f.to },
+    ),
   ]);
   const sumsOf = new Map(sums.map((s) => [Number(s.technician_id), s]));
+  const visitsOf = new Map(visits.map((v) => [Number(v.technician_id), v]));
   const medianOf = medianByKey(hours);
   return technicians.map((u) => {
     const r = sumsOf.get(u.id);
@@ -145,6 +155,11 @@ export async function teamTable(f: Filters): Promise<TeamRow[]> {
       recaptures: Number(r?.recaptures ?? 0),
       meanRevisionsToAcceptance: r ? ratio(r.accepted_revision_sum, r.accepted) : null,
       medianHoursVisitToAcceptance: medianOf.get(u.id) ?? null,
+      visits: {
+        timed: Number(visitsOf.get(u.id)?.n ?? 0),
+        plannedMinutes: Number(visitsOf.get(u.id)?.planned ?? 0),
+        actualMinutes: Number(visitsOf.get(u.id)?.actual ?? 0),
+      },
       tooFew: reviews < MIN_REVIEWS_FOR_RATES,
     };
   });

@@ -2,7 +2,7 @@
 // client's edits were based on the current one; otherwise 409 with the current plan.
 import type { Transaction } from 'sequelize';
 
-import { type CameraClass, CAMERA_CLASSES } from '../../shared/capture-record';
+import { CAMERA_CLASSES, type CameraClass } from '../../shared/capture-record';
 import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
 import { emptyVisitPlan, type VisitPlan } from '../../shared/visit-plan';
 import { type CameraClassSettings, DEFAULT_CAMERA_CLASS_SETTINGS } from '../../shared/visit-settings';
@@ -17,7 +17,9 @@ type Actor = Express.User;
 export type PlanView = { plan: VisitPlan; version: number; savedAt: string | null };
 
 const planView = (row: VisitPlanRow | null): PlanView =>
-  row ? { plan: row.data, version: row.version, savedAt: row.updatedAt.toISOString() } : { plan: emptyVisitPlan(), version: 0, savedAt: null };
+  row
+    ? { plan: row.data, version: row.version, savedAt: row.updatedAt.toISOString() }
+    : { plan: emptyVisitPlan(), version: 0, savedAt: null };
 
 // Only the plan's own fields are kept, whatever else a client sends.
 export function pickVisitPlan(body: VisitPlan): VisitPlan {
@@ -43,7 +45,13 @@ export function pickVisitPlan(body: VisitPlan): VisitPlan {
     modelsAccepted: body.modelsAccepted,
     startLevel: body.startLevel ?? null,
     units: body.units,
-    rooms: body.rooms.map(({ key, name, level, lengthM, widthM }) => ({ key, name, level, lengthM: lengthM ?? null, widthM: widthM ?? null })),
+    rooms: body.rooms.map(({ key, name, level, lengthM, widthM }) => ({
+      key,
+      name,
+      level,
+      lengthM: lengthM ?? null,
+      widthM: widthM ?? null,
+    })),
     hazards: [...new Set(body.hazards)],
     kitTicked: [...new Set(body.kitTicked)],
     onSite: { arrivedAt: body.onSite.arrivedAt ?? null, leftAt: body.onSite.leftAt ?? null },

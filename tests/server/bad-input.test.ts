@@ -5,8 +5,8 @@ import { sequelize } from '../../server/models';
 import type { Role } from '../../shared/roles';
 import { claimFor, createJob, createSubmittedJob, createUser, reworkRequested, secondReviewByAnother } from '../helpers/factories';
 import { type Agent, countRows, resetSignInLimits, send, signedInAgent, type Upload } from '../helpers/http';
-import { completeRecord } from '../helpers/records';
 import { housePlan } from '../helpers/plans';
+import { completeRecord } from '../helpers/records';
 import { registeredRoutes } from '../helpers/route-walk';
 import { PNG_1X1 } from '../helpers/sample-files';
 

@@ -25,8 +25,8 @@ import {
   TEST_PASSWORD,
 } from '../helpers/factories';
 import { type Agent, clientAgent, resetSignInLimits, send, signedInAgent, type Upload } from '../helpers/http';
-import { completeRecord } from '../helpers/records';
 import { housePlan } from '../helpers/plans';
+import { completeRecord } from '../helpers/records';
 import { registeredRoutes } from '../helpers/route-walk';
 import { PNG_1X1 } from '../helpers/sample-files';
 

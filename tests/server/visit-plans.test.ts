@@ -32,7 +32,11 @@ describe('PUT and GET /api/jobs/:id/plan', () => {
     const read = await reviewer.get(`/api/jobs/${job.id}/plan`);
     expect(read.status).toBe(200);
     expect(read.body.plan.notes).toBe('Dog in the yard');
-    expect(read.body.plan.models.map((m: { structure: string }) => m.structure)).toEqual(['main_dwelling', 'detached_garage', 'crawl_space']);
+    expect(read.body.plan.models.map((m: { structure: string }) => m.structure)).toEqual([
+      'main_dwelling',
+      'detached_garage',
+      'crawl_space',
+    ]);
   });
 
   it('keeps only the plan’s own fields', async () => {
@@ -127,6 +131,36 @@ describe('PUT and GET /api/jobs/:id/plan', () => {
   }
 });
 
+describe('planned against actual time on site in the team table', () => {
+  it('sums the timed visits of the period per technician', async () => {
+    const { agent, user } = await signedInAgent(app, 'technician');
+    const jobs = [
+      await createJob({ technicianId: user.id }),
+      await createJob({ technicianId: user.id }),
+      await createJob({ technicianId: user.id }),
+    ];
+    // 32 planned each (see above); 41 and 50 minutes actual; the third visit has no leaving time.
+    await savePlan(
+      agent,
+      jobs[0].id,
+      housePlan({ onSite: { arrivedAt: '2026-11-30T09:00:00.000Z', leftAt: '2026-11-30T09:41:00.000Z' } }),
+      0,
+    );
+    await savePlan(
+      agent,
+      jobs[1].id,
+      housePlan({ onSite: { arrivedAt: '2026-11-30T13:00:00.000Z', leftAt: '2026-11-30T13:50:00.000Z' } }),
+      0,
+    );
+    await savePlan(agent, jobs[2].id, housePlan(), 0);
+    const { agent: manager } = await signedInAgent(app, 'manager');
+    const today = new Date().toISOString().slice(0, 10);
+    const res = await manager.get(`/api/trends/team?from=${today}&to=${today}`);
+    const mine = res.body.rows.find((r: { technician: { id: number } }) => r.technician.id === user.id);
+    expect(mine.visits).toEqual({ timed: 2, plannedMinutes: 64, actualMinutes: 91 });
+  });
+});
+
 describe('the plan at submit', () => {
   it('warns, without blocking, of a planned model and room the record lacks', async () => {
     const { agent, job } = await technicianWithJob(app);
@@ -185,7 +219,10 @@ describe('camera class settings', () => {
   it('refuses a technician or reviewer changing the settings', async () => {
     for (const role of ['technician', 'reviewer', 'admin'] as const) {
       const { agent } = await signedInAgent(app, role);
-      const res = await agent.put('/api/camera-classes/camera_360').set('If-Match', '"0"').send({ kitItems: ['x'], setupMinutes: 1 });
+      const res = await agent
+        .put('/api/camera-classes/camera_360')
+        .set('If-Match', '"0"')
+        .send({ kitItems: ['x'], setupMinutes: 1 });
       expect(res.status).toBe(403);
     }
   });

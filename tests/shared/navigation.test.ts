@@ -23,3 +23,9 @@ describe('role navigation', () => {
     expect(ROLES.filter((role) => navFor(role, { mailboxOpen: true }).some((i) => i.href === '/mailbox'))).toEqual([...ROLES]);
   });
 });
+
+describe('kit and timing', () => {
+  it('is a manager page', () => {
+    expect(ROLES.filter((role) => canOpen(role, '/kit'))).toEqual(['manager']);
+  });
+});

@@ -13,9 +13,11 @@ import {
   modelCoverage,
   outdoorStations,
   roomEstimates,
+  suggestInScope,
   suggestModels,
   suggestStartLevel,
   SUN_LIMITED,
+  timeOnSiteText,
   visitEstimate,
 } from '@/shared/visit-suggestions';
 
@@ -208,5 +210,25 @@ describe('station and time estimates (worked values)', () => {
 
   it('lists the kit items not ticked yet, in order', () => {
     expect(unTickedKit(['Tripod', 'Batteries', 'Wedges'], ['Wedges', 'Tripod'])).toEqual(['Batteries']);
+  });
+});
+
+describe('scope suggestion', () => {
+  it('puts the dwelling, attic and crawl space in scope, and detached structures for losses that reach them', () => {
+    expect(suggestInScope('attic', 'water')).toBe(true);
+    expect(suggestInScope('detached_garage', 'water')).toBe(false);
+    expect(suggestInScope('detached_garage', 'hail')).toBe(true);
+    expect(suggestInScope('shed', 'smoke')).toBe(false);
+  });
+});
+
+describe('planned against actual time on site', () => {
+  it('sums the visits and gives the share over or under the plan', () => {
+    // 130 planned, 160 actual: (160 − 130) / 130 = 23.1 % over.
+    expect(timeOnSiteText({ timed: 3, plannedMinutes: 130, actualMinutes: 160 })).toBe(
+      '3 visits: planned 2 h 10 min, actual 2 h 40 min (+23 % over)',
+    );
+    expect(timeOnSiteText({ timed: 1, plannedMinutes: 60, actualMinutes: 45 })).toBe('1 visit: planned 1 h, actual 45 min (−25 % under)');
+    expect(timeOnSiteText({ timed: 0, plannedMinutes: 0, actualMinutes: 0 })).toBe('No timed visits');
   });
 });

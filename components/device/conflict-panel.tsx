@@ -1,35 +1,37 @@
-// Two versions of one draft: the technician's (on this phone) and the one saved meanwhile from
-// another tab or device. Nothing is overwritten until the technician chooses.
+// Two versions of one draft (a capture record, a visit plan): the technician's (on this phone)
+// and the one saved meanwhile from another tab or device. Nothing is overwritten until the
+// technician chooses.
 import { useEffect, useRef } from 'react';
 import { StyleSheet, View } from 'react-native';
 
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { colors, space } from '@/components/ui/theme';
-import type { CaptureRecord } from '@/shared/capture-record';
-import { diffRevisions } from '@/shared/revision-diff';
+
+export type Difference = { path: string; kind?: string; label: string; before: string; after: string };
 
 type Props = {
-  mine: CaptureRecord;
-  theirs: { record: CaptureRecord; savedAt: string | null };
+  // What the draft is, in the title's words: "record", "plan".
+  what: string;
+  differences: Difference[];
+  savedAt: string | null;
   onKeepMine: () => void;
   onUseTheirs: () => void;
 };
 
-export function ConflictPanel({ mine, theirs, onKeepMine, onUseTheirs }: Props) {
-  const differences = diffRevisions({ record: theirs.record, files: [] }, { record: mine, files: [] });
+export function ConflictPanel({ what, differences, savedAt, onKeepMine, onUseTheirs }: Props) {
   const ref = useRef<View>(null);
   // The technician may be far down the form: bring the choice into view (web: a DOM node).
   useEffect(() => {
     (ref.current as unknown as { scrollIntoView?: (o: object) => void } | null)?.scrollIntoView?.({ block: 'center' });
   }, []);
-  const when = theirs.savedAt ? new Date(theirs.savedAt).toLocaleString([], { dateStyle: 'medium', timeStyle: 'short' }) : 'earlier';
+  const when = savedAt ? new Date(savedAt).toLocaleString([], { dateStyle: 'medium', timeStyle: 'short' }) : 'earlier';
   return (
-    <View ref={ref} style={styles.box} role="alertdialog" aria-label="Two versions of this record">
+    <View ref={ref} style={styles.box} role="alertdialog" aria-label={`Two versions of this ${what}`}>
       <Text variant="heading" role="heading" aria-level={2}>
-        Two versions of this record
+        {`Two versions of this ${what}`}
       </Text>
-      <Text>{`This record was also saved from another tab or device (${when}). Your changes are kept on this phone until you choose.`}</Text>
+      <Text>{`This ${what} was also saved from another tab or device (${when}). Your changes are kept on this phone until you choose.`}</Text>
       <Text variant="label">
         {differences.length ? `${differences.length} difference(s): saved version → yours` : 'The two versions hold the same facts.'}
       </Text>
