@@ -3,7 +3,7 @@
 import type { Transaction } from 'sequelize';
 
 import { CAMERA_CLASSES, type CameraClass } from '../../shared/capture-record';
-import { EDITABLE_STATUSES, JOB_STATUS_LABELS } from '../../shared/jobs';
+import { EDITABLE_STATUSES, JOB_STATUS_LABELS, type JobStatus } from '../../shared/jobs';
 import { emptyVisitPlan, type VisitPlan } from '../../shared/visit-plan';
 import { type CameraClassSettings, DEFAULT_CAMERA_CLASS_SETTINGS } from '../../shared/visit-settings';
 import { minutesOnSite, visitEstimate } from '../../shared/visit-suggestions';
@@ -90,7 +90,7 @@ export async function savePlan(actor: Actor, jobId: number, body: VisitPlan, bas
     if (actor.role !== 'technician' || job.technicianId !== actor.id)
       throw forbidden('Only the technician assigned to this job can change its visit plan.');
     if (!EDITABLE_STATUSES.includes(job.status))
-      throw conflict(`The visit plan cannot be changed while the job is "${JOB_STATUS_LABELS[job.status]}".`);
+      throw conflict(`The visit plan cannot be changed while the job is "${JOB_STATUS_LABELS[job.status as JobStatus]}".`);
     const row = await VisitPlanRow.findByPk(jobId, { transaction, lock: transaction.LOCK.UPDATE });
     if ((row?.version ?? 0) !== baseVersion) throw staleVersion('This visit plan', planView(row));
     const settings = plan.cameraClass ? await settingsFor(plan.cameraClass, transaction) : null;
