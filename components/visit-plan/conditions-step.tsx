@@ -39,6 +39,7 @@ export function ConditionsStep({ values, plan, change }: Props) {
   const outdoor = outdoorStations(plan.cameraClass, plan.conditions);
   const suggested = suggestModels(plan);
   const coverage = modelCoverage(plan);
+  const asSuggested = values.modelsAccepted && sameModels(values.models, suggested);
   const stale = values.modelsAccepted && (coverage.uncovered.length > 0 || coverage.twice.length > 0);
   const updateModel = (key: string, patch: Partial<PlannedModel>) =>
     change({ models: values.models.map((m) => (m.key === key ? { ...m, ...patch } : m)) });
@@ -64,14 +65,18 @@ export function ConditionsStep({ values, plan, change }: Props) {
       />
       <Text role="status">{outdoor.explanation}</Text>
 
-      <Text variant="heading" role="heading" aria-level={3}>
-        Suggested models
-      </Text>
-      {suggested.length === 0 ? <Text variant="muted">Put at least one structure in scope (step 1).</Text> : null}
-      {suggested.map((m, i) => (
-        <ModelLine key={m.key} model={m} index={i} />
-      ))}
-      {suggested.length > 0 && !sameModels(values.models, suggested) ? (
+      {asSuggested ? null : (
+        <>
+          <Text variant="heading" role="heading" aria-level={3}>
+            Suggested models
+          </Text>
+          {suggested.length === 0 ? <Text variant="muted">Put at least one structure in scope (step 1).</Text> : null}
+          {suggested.map((m, i) => (
+            <ModelLine key={m.key} model={m} index={i} />
+          ))}
+        </>
+      )}
+      {suggested.length > 0 && !asSuggested ? (
         <Button
           label={
             values.modelsAccepted
@@ -95,6 +100,7 @@ export function ConditionsStep({ values, plan, change }: Props) {
           <Text variant="heading" role="heading" aria-level={3}>
             {`Your models (${values.models.length})`}
           </Text>
+          {asSuggested ? <Text variant="small">As suggested. Change a reason or a note if the site says otherwise.</Text> : null}
           {values.models.map((m, i) => (
             <View key={m.key} style={styles.card}>
               <Text variant="label">{`Model ${i + 1}: ${m.structureNote}`}</Text>

@@ -14,7 +14,6 @@ import { Text } from '@/components/ui/text';
 import { colors, fonts, space } from '@/components/ui/theme';
 import type { LossType } from '@/shared/jobs';
 import { diffPlans } from '@/shared/plan-diff';
-import { suggestedHazards } from '@/shared/visit-hazards';
 import type { VisitPlan } from '@/shared/visit-plan';
 
 import { ConditionsStep } from './conditions-step';
@@ -49,14 +48,14 @@ const samePlan = (a: VisitPlan, b: VisitPlan) =>
   JSON.stringify(a.models.map((m) => m.structureKeys)) === JSON.stringify(b.models.map((m) => m.structureKeys));
 const toDoc = (values: PlanValues) => toPlan(values).plan;
 
-// A new plan starts with the dwelling, the arrival time and the hazards the loss suggests.
+// A new plan starts with the dwelling and the arrival time. Hazards start unticked: the loss
+// suggests them (listed first), the technician says what is really there.
 function startingValues(server: PlanVersion, lossType: LossType): { values: PlanValues; fresh: boolean } {
   if (server.version > 0) return { values: toPlanValues(server.plan), fresh: false };
   const structures = [newStructure('main_dwelling', lossType)];
   const plan: VisitPlan = {
     ...server.plan,
     structures,
-    hazards: suggestedHazards(lossType, structures),
     onSite: { arrivedAt: new Date().toISOString(), leftAt: null },
   };
   return { values: toPlanValues(plan), fresh: true };

@@ -191,29 +191,36 @@ describe('the plan at submit', () => {
 
 describe('camera class settings', () => {
   it('lists every camera class with the defaults until a manager changes one', async () => {
-    await CameraClassSetting.destroy({ where: { cameraClass: 'laser_scanner' } });
+    await CameraClassSetting.destroy({ where: { cameraClass: 'handheld_lidar' } });
     const { agent } = await signedInAgent(app, 'technician');
     const res = await agent.get('/api/camera-classes');
     expect(res.status).toBe(200);
-    const laser = res.body.cameraClasses.find((c: { cameraClass: string }) => c.cameraClass === 'laser_scanner');
-    expect(laser).toMatchObject({ version: 0, minutesPerStation: 4, setupMinutes: 25 });
-    expect(laser.kitItems).toContain('Door wedges');
+    expect(res.body.cameraClasses.map((c: { cameraClass: string }) => c.cameraClass)).toEqual([
+      'tripod_depth',
+      'camera_360',
+      'handheld_lidar',
+      'laser_scanner',
+    ]);
+    const lidar = res.body.cameraClasses.find((c: { cameraClass: string }) => c.cameraClass === 'handheld_lidar');
+    expect(lidar).toMatchObject({ version: 0, minutesPerStation: null, setupMinutes: 20 });
+    expect(lidar.kitItems).toContain('Door wedges');
   });
 
+  // The laser scanner's settings: the browser tests plan with the depth camera's defaults.
   it('lets a manager change the kit and times, version-checked, and plans use the new times', async () => {
-    await CameraClassSetting.destroy({ where: { cameraClass: 'tripod_depth' } });
+    await CameraClassSetting.destroy({ where: { cameraClass: 'laser_scanner' } });
     const { agent: manager } = await signedInAgent(app, 'manager');
-    const body = { kitItems: [' Tripod ', 'Spare battery'], minutesPerStation: 2, setupMinutes: 10 };
-    const saved = await manager.put('/api/camera-classes/tripod_depth').set('If-Match', '"0"').send(body);
+    const body = { kitItems: [' Survey tripod ', 'Spare battery'], minutesPerStation: 2, setupMinutes: 10 };
+    const saved = await manager.put('/api/camera-classes/laser_scanner').set('If-Match', '"0"').send(body);
     expect(saved.status).toBe(200);
-    expect(saved.body.settings).toMatchObject({ kitItems: ['Tripod', 'Spare battery'], minutesPerStation: 2, version: 1 });
-    expect((await manager.put('/api/camera-classes/tripod_depth').set('If-Match', '"0"').send(body)).status).toBe(409);
+    expect(saved.body.settings).toMatchObject({ kitItems: ['Survey tripod', 'Spare battery'], minutesPerStation: 2, version: 1 });
+    expect((await manager.put('/api/camera-classes/laser_scanner').set('If-Match', '"0"').send(body)).status).toBe(409);
 
     const { agent, job } = await technicianWithJob(app);
-    await savePlan(agent, job.id, housePlan(), 0);
-    // 10 min + 8 stations × 2 min = 26 min.
-    expect((await VisitPlanRow.findByPk(job.id))!.plannedMinutes).toBe(26);
-    await CameraClassSetting.destroy({ where: { cameraClass: 'tripod_depth' } });
+    await savePlan(agent, job.id, housePlan({ cameraClass: 'laser_scanner' }), 0);
+    // At 10 m spacing each room (16.7 m² and 9.3 m²) needs 1 station: 10 min + 2 × 2 min = 14 min.
+    expect((await VisitPlanRow.findByPk(job.id))!.plannedMinutes).toBe(14);
+    await CameraClassSetting.destroy({ where: { cameraClass: 'laser_scanner' } });
   });
 
   it('refuses a technician or reviewer changing the settings', async () => {
