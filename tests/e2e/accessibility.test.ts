@@ -27,6 +27,7 @@ const SCREENS: Record<string, { who: string; visits: Record<string, Visit> }> = 
     visits: {
       'my jobs': { path: '/jobs', ready: 'My jobs' },
       'job and capture record': { path: firstJob('draft,rework_requested'), ready: /^Job / },
+      'visit plan': { path: async (page) => `${await firstJob('draft,rework_requested')(page)}/plan`, ready: /^Step 1 of 6/ },
       'my quality': { path: '/trends/mine', ready: /quality/i },
       notifications: { path: '/notifications', ready: 'Notifications' },
     },
@@ -46,6 +47,7 @@ const SCREENS: Record<string, { who: string; visits: Record<string, Visit> }> = 
       jobs: { path: '/jobs', ready: /Jobs/ },
       'new job': { path: '/jobs/new', ready: 'New job' },
       rubric: { path: '/rubric', ready: /Rubric/ },
+      'kit and timing': { path: '/kit', ready: 'Kit and timing' },
     },
   },
   admin: {
