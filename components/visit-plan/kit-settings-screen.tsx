@@ -84,12 +84,20 @@ export function KitSettingsScreen() {
     <Screen title="Kit and timing" subtitle="The kit check and the time estimate of every visit plan, per camera class">
       {classes.error ? <Notice tone="error">{classes.error.message}</Notice> : null}
       {classes.data?.map((settings) => (
-        <ClassCard key={`${settings.cameraClass}-${settings.version}`} settings={settings} />
+        <ClassCard key={settings.cameraClass} settings={settings} />
       ))}
     </Screen>
   );
 }
 
 const styles = StyleSheet.create({
-  card: { gap: space.sm, borderWidth: 1, borderColor: colors.line, borderRadius: 8, padding: space.lg, backgroundColor: colors.surface },
+  card: {
+    gap: space.sm,
+    maxWidth: 760,
+    borderWidth: 1,
+    borderColor: colors.line,
+    borderRadius: 8,
+    padding: space.lg,
+    backgroundColor: colors.surface,
+  },
 });

@@ -5,7 +5,7 @@
 import { type APIRequestContext, type BrowserContext, type Page, request } from 'playwright-core';
 
 import { DEMO_PASSWORD } from '../../seeders/data/demo-people';
-import { BASE_URL, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
+import { BASE_URL, DESKTOP, launchBrowser, PHONE, screenshot, signIn } from '../helpers/browser';
 import { as, call, demoPerson, draftJob } from '../helpers/e2e-api';
 
 jest.setTimeout(180_000);
@@ -211,4 +211,30 @@ it('keeps a plan made offline on the phone, through a reload, and saves it when 
     .waitFor({ timeout: 30_000 });
   const saved = await serverPlan(jobId);
   expect(saved.plan.rooms.map((r) => r.name)).toEqual(['Utility room']);
+});
+
+it("lets a manager add to a camera class's kit list at 1440 × 900, and the technician's next plan lists it", async () => {
+  const desk = await launchBrowser(DESKTOP);
+  const manager = await desk.newPage();
+  try {
+    await signIn(manager, demoPerson('mara.').email, DEMO_PASSWORD);
+    await manager.waitForURL((url) => !url.pathname.endsWith('/sign-in'));
+    await manager.goto(`${BASE_URL}/kit`);
+    const card = manager.getByRole('group', { name: 'Depth camera on tripod' });
+    const kit = card.getByLabel('Kit list for Depth camera on tripod (one item a line)');
+    const item = `Moisture meter ${Date.now().toString(36)}`;
+    await kit.fill(`${await kit.inputValue()}\n${item}`);
+    await card.getByRole('button', { name: 'Save Depth camera on tripod' }).click();
+    await manager.getByText('Saved. Plans made from now on use these for a depth camera on tripod.').waitFor();
+    await screenshot(manager, 'visit-plan-kit-settings-desktop');
+
+    const jobId = await draftJob(api, { technician: 'tess.', claimReference: unique(), dueInHours: 48 });
+    await page.goto(`${BASE_URL}/jobs/${jobId}/plan`);
+    await page.getByRole('tab', { name: 'Step 2: Camera and models' }).click();
+    await page.getByRole('radiogroup', { name: 'Camera class' }).getByRole('radio', { name: 'Depth camera on tripod' }).click();
+    await page.getByRole('tab', { name: 'Step 6: Kit and leaving' }).click();
+    await page.getByRole('checkbox', { name: item }).waitFor();
+  } finally {
+    await desk.close();
+  }
 });
