@@ -56,6 +56,13 @@ export const config = {
     // After this many failed attempts a message is marked failed and shown to managers.
     maxAttempts: number('OUTBOX_MAX_ATTEMPTS', 8),
   },
+  risk: {
+    // How often the rework-risk model is refitted (one instance fits; 0 turns it off, as under
+    // test, where a fit would write while tests count rows).
+    fitIntervalMs: number('RISK_FIT_INTERVAL_MS', nodeEnv === 'test' ? 0 : 6 * 3_600_000),
+    // Reviewed revisions needed before the hint is shown.
+    minReviews: number('RISK_MIN_REVIEWS', 200),
+  },
   // Time the technician has to answer a rework request; a reminder goes out after it.
   reworkHours: number('REWORK_HOURS', 48),
   // How long a link sent to the adjuster stays open; a manager may revoke or re-issue it.

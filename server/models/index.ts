@@ -12,6 +12,7 @@ import { Review } from './review';
 import { ReviewDraft } from './review-draft';
 import { ReviewScore } from './review-score';
 import { ReworkItem } from './rework-item';
+import { RiskModel } from './risk-model';
 import { Rubric } from './rubric';
 import { SecondReview } from './second-review';
 import { Session } from './session';
@@ -41,6 +42,7 @@ Notification.initModel(sequelize);
 NotificationPref.initModel(sequelize);
 VisitPlanRow.initModel(sequelize);
 CameraClassSetting.initModel(sequelize);
+RiskModel.initModel(sequelize);
 
 Job.belongsTo(User, { as: 'technician', foreignKey: 'technicianId' });
 Job.belongsTo(User, { as: 'createdBy', foreignKey: 'createdById' });
@@ -69,6 +71,7 @@ export {
   ReviewDraft,
   ReviewScore,
   ReworkItem,
+  RiskModel,
   Rubric,
   SecondReview,
   sequelize,

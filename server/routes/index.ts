@@ -12,6 +12,7 @@ import { passwordRouter } from './password';
 import { queueRouter } from './queue';
 import { reviewsRouter } from './reviews';
 import { reworkRouter } from './rework';
+import { riskModelRouter } from './risk-model';
 import { rubricsRouter } from './rubrics';
 import { sessionRouter } from './session';
 import { shareRouter } from './share';
@@ -42,4 +43,5 @@ export const apiRouters: { prefix: string; router: Router }[] = [
   { prefix: '/api/share', router: shareRouter },
   { prefix: '/api/notifications', router: notificationsRouter },
   { prefix: '/api', router: visitPlansRouter },
+  { prefix: '/api/risk-model', router: riskModelRouter },
 ];

@@ -4,6 +4,7 @@ import { buildPendingSummaries } from '../services/delivery-service';
 import { purgeExpired } from '../services/maintenance-service';
 import { sendPendingEmails } from '../services/outbox-service';
 import { queueOverdueReworkReminders } from '../services/reminder-service';
+import { refitRiskModelIfDue } from '../services/risk-model-service';
 
 // Runs in every instance; the leases keep them from building or sending the same row twice.
 export function startOutboxWorker() {
@@ -20,6 +21,7 @@ export function startOutboxWorker() {
         lastReminderCheck = Date.now();
         await queueOverdueReworkReminders();
         await purgeExpired();
+        await refitRiskModelIfDue();
       }
       await buildPendingSummaries();
       await sendPendingEmails(transport);

@@ -50,6 +50,8 @@ const INPUTLESS = new Set([
   // without a bad value is a valid one, and claiming the next record is its job.
   'POST /api/queue/claim-next',
   'POST /api/notifications/read-all',
+  // Takes no input: any request from a manager is a valid refit, which writes a model version.
+  'POST /api/risk-model/fit',
 ]);
 
 // Values a careless or hostile client sends where a field is expected.

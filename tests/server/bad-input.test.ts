@@ -23,6 +23,7 @@ type BadInputCase = {
 
 // Routes that take no input at all.
 const NO_INPUT = [
+  'POST /api/risk-model/fit',
   'POST /api/notifications/read-all',
   'DELETE /api/session',
   'DELETE /api/jobs/:id/claim',

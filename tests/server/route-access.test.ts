@@ -99,6 +99,8 @@ const ROUTES: Record<string, RouteCase> = {
     prepare: async (me) => ({ path: `/api/jobs/${(await jobFor(me)).id}/plan`, body: housePlan(), headers: { 'If-Match': '"0"' } }),
   },
   'GET /api/camera-classes': { allowed: [...ROLES] },
+  'GET /api/risk-model': { allowed: [...ROLES] },
+  'POST /api/risk-model/fit': { allowed: ['manager'] },
   'PUT /api/camera-classes/:cameraClass': {
     allowed: ['manager'],
     prepare: async () => {
