@@ -15,6 +15,7 @@ const nodeTs = {
 };
 
 module.exports = {
+  testSequencer: '<rootDir>/tests/helpers/sequencer.js',
   projects: [
     {
       ...nodeTs,

@@ -7,6 +7,7 @@ import { putObject } from '../server/storage/s3';
 import type { ClaimContacts } from '../shared/contacts';
 import { DEFAULT_RUBRIC } from '../shared/default-rubric';
 import { demoContacts } from './data/demo-contacts';
+import { demoHistory } from './data/demo-history';
 import { type DemoJob, demoJobs } from './data/demo-jobs';
 import { DEMO_PEOPLE } from './data/demo-people';
 import { demoStationCsv } from './data/demo-stations';
@@ -28,7 +29,9 @@ export async function up(queryInterface: QueryInterface) {
   const managerId = idOf.get(DEMO_PEOPLE.find((p) => p.role === 'manager')!.email)!;
   const [rubric] = await db.query<{ id: number }>('SELECT id FROM rubrics ORDER BY version ASC LIMIT 1', { type: QueryTypes.SELECT });
   const now = new Date();
-  const jobs = demoJobs(now);
+  // The recent twelve weeks first (their positions pick station files and contacts), then two
+  // years of finished history for the rework-risk model.
+  const jobs = [...demoJobs(now), ...demoHistory(now)];
 
   const existing = await db.query<{ claim_reference: string }>('SELECT claim_reference FROM jobs WHERE claim_reference IN (:refs)', {
     replacements: { refs: jobs.map((j) => j.claimReference) },
@@ -308,7 +311,7 @@ async function storeStationFile(
 }
 
 export async function down(queryInterface: QueryInterface) {
-  const refs = demoJobs().map((j) => j.claimReference);
+  const refs = [...demoJobs(), ...demoHistory()].map((j) => j.claimReference);
   await queryInterface.sequelize.query('DELETE FROM jobs WHERE claim_reference IN (:refs)', {
     replacements: { refs },
     type: QueryTypes.DELETE,

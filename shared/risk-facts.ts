@@ -7,6 +7,8 @@ import { expectedStations, MAX_STATION_SPACING_M } from './station-spacing';
 
 type FactDef = {
   key: string;
+  // The fact as a row of the manager's odds-ratio table.
+  label: string;
   // The fact in plain words for a value of it (only facts that raise the risk are named).
   words: (value: number) => string;
   // What would lower it; null where nothing on site changes it (the loss type, say).
@@ -19,49 +21,71 @@ const plural = (n: number, one: string, many = `${one}s`) => `${n} ${n === 1 ? o
 export const RISK_FACTS: FactDef[] = [
   {
     key: 'unflaggedReflective',
+    label: 'Reflective surface found, not flagged (each)',
     words: (n) => `${plural(n, 'reflective surface')} found but not flagged`,
     lower: 'Flag every mirror and glass surface you found.',
   },
-  { key: 'unresolvedGaps', words: (n) => `${plural(n, 'coverage gap')} not resolved`, lower: 'Resolve the gaps, or explain each one.' },
+  {
+    key: 'unresolvedGaps',
+    label: 'Coverage gap not resolved (each)',
+    words: (n) => `${plural(n, 'coverage gap')} not resolved`,
+    lower: 'Resolve the gaps, or explain each one.',
+  },
   {
     key: 'roomsShort',
+    label: 'Room short of expected stations (each)',
     words: (n) => `${plural(n, 'room')} short of the expected stations`,
     lower: 'Add stations where rooms are short of the expected count.',
   },
   {
     key: 'noDoorwayStation',
+    label: 'Room without a doorway station (each)',
     words: (n) => `${plural(n, 'room')} without a doorway station`,
     lower: 'Put a station in each doorway so both rooms are in view.',
   },
   {
     key: 'damageUnseen',
+    label: 'Damage area with no station or photo (each)',
     words: (n) => `${plural(n, 'damage area')} with no viewing station or photo`,
     lower: 'Name a station or attach a photo for each damage area.',
   },
   {
     key: 'modelsSplit',
+    label: 'Model split out (each)',
     words: (n) => `${plural(n, 'model')} split out`,
     lower: 'Link structures with stations where you can, so fewer models are split.',
   },
   {
     key: 'weakLinks',
+    label: 'Weak link between stations (each)',
     words: (n) => `${plural(n, 'weak link')} between stations`,
     lower: 'Add a station where the chain between stations is long.',
   },
   {
     key: 'sparseStations',
+    label: 'Station far from its neighbours (each)',
     words: (n) => `${plural(n, 'station')} far from its neighbours`,
     lower: 'Add stations between those far apart.',
   },
-  { key: 'noStationFile', words: () => 'no station file attached', lower: "Attach the platform's station file." },
-  { key: 'resubmission', words: (n) => `revision ${n + 1}`, lower: null },
-  { key: 'rooms', words: (n) => plural(n, 'room'), lower: null },
-  { key: 'levels', words: (n) => plural(n, 'level'), lower: null },
-  { key: 'camera360', words: () => 'a 360 camera', lower: null },
-  { key: 'cameraOther', words: () => 'a handheld or laser camera', lower: null },
-  { key: 'lossFire', words: () => 'a fire or smoke loss', lower: null },
-  { key: 'lossWindHail', words: () => 'a wind or hail loss', lower: null },
-  { key: 'notSingleFamily', words: () => 'not a single-family house', lower: null },
+  {
+    key: 'noStationFile',
+    label: 'No station file attached',
+    words: () => 'no station file attached',
+    lower: "Attach the platform's station file.",
+  },
+  { key: 'resubmission', label: 'Each revision after the first', words: (n) => `revision ${n + 1}`, lower: null },
+  { key: 'rooms', label: 'Each room', words: (n) => plural(n, 'room'), lower: null },
+  { key: 'levels', label: 'Each level', words: (n) => plural(n, 'level'), lower: null },
+  { key: 'camera360', label: '360 camera (against a tripod depth camera)', words: () => 'a 360 camera', lower: null },
+  {
+    key: 'cameraOther',
+    label: 'Handheld or laser camera (against a tripod depth camera)',
+    words: () => 'a handheld or laser camera',
+    lower: null,
+  },
+  { key: 'lossFire', label: 'Fire or smoke loss (against water)', words: () => 'a fire or smoke loss', lower: null },
+  { key: 'lossWindHail', label: 'Wind or hail loss (against water)', words: () => 'a wind or hail loss', lower: null },
+  { key: 'notSingleFamily', label: 'Not a single-family house', words: () => 'not a single-family house', lower: null },
 ];
 
 export type RiskJob = { lossType: LossType; propertyType: PropertyType };

@@ -7,6 +7,7 @@ import { ApiError } from '@/components/lib/api-client';
 import { lazyView } from '@/components/lib/lazy-view';
 import { saveRecordDraft, useRecordSubmitMutation } from '@/components/queries/capture-record';
 import { useStationAnalysisQuery } from '@/components/queries/jobs';
+import { RiskHintPanel } from '@/components/risk/risk-hint-panel';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
@@ -103,6 +104,7 @@ export function CaptureRecordForm({ detail, userId, plan }: Props) {
     }
   };
 
+  const riskJob = useMemo(() => ({ lossType: detail.job.lossType, propertyType: detail.job.propertyType }), [detail.job]);
   const errors = { ...sync.refused, ...serverErrors, ...conversion.errors };
   const photos = detail.files.filter((f) => f.kind === 'photo');
   const isResubmission = detail.revisions.length > 0;
@@ -110,6 +112,13 @@ export function CaptureRecordForm({ detail, userId, plan }: Props) {
   const submitPanel = (
     <View style={{ gap: space.md }}>
       <FindingsPanel findings={findings} />
+      <RiskHintPanel
+        record={conversion.record}
+        analysis={stations.data?.analysis ?? null}
+        job={riskJob}
+        revision={detail.revisions.length + 1}
+        audience="technician"
+      />
       {submit.error instanceof ApiError ? <Notice tone="error">{submit.error.message}</Notice> : null}
       <Button
         label={isResubmission ? `Submit revision ${detail.revisions.length + 1}` : 'Submit capture record'}

@@ -5,6 +5,7 @@ import { StyleSheet, useWindowDimensions, View } from 'react-native';
 import { lazyView } from '@/components/lib/lazy-view';
 import { useSessionQuery } from '@/components/queries/session';
 import { usePlanQuery } from '@/components/queries/visit-plan';
+import { RiskHintPanel } from '@/components/risk/risk-hint-panel';
 import { HelpOverlay } from '@/components/ui/help-overlay';
 import { Notice } from '@/components/ui/notice';
 import { Section } from '@/components/ui/section';
@@ -59,6 +60,13 @@ export function ScoringScreen({ workspace, onDecided }: { workspace: Workspace; 
           {workspace.previous ? (
             <ChangesPanel previous={workspace.previous} currentRevision={revision.number} files={revision.files} />
           ) : null}
+          <RiskHintPanel
+            record={revision.record}
+            analysis={revision.stationAnalysis}
+            job={{ lossType: job.lossType, propertyType: job.propertyType }}
+            revision={revision.number}
+            audience="reviewer"
+          />
           <RevisionPanel revision={revision} />
           <JobPlan jobId={job.id} />
           {revision.stationAnalysis ? (

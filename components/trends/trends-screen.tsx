@@ -1,5 +1,5 @@
-import { useLocalSearchParams, useRouter } from 'expo-router';
-import { View } from 'react-native';
+import { Link, useLocalSearchParams, useRouter } from 'expo-router';
+import { StyleSheet, View } from 'react-native';
 
 import { lazyView } from '@/components/lib/lazy-view';
 import {
@@ -13,7 +13,7 @@ import { Notice } from '@/components/ui/notice';
 import { Screen } from '@/components/ui/screen';
 import { Section } from '@/components/ui/section';
 import { Text } from '@/components/ui/text';
-import { space } from '@/components/ui/theme';
+import { colors, fonts, space } from '@/components/ui/theme';
 
 import { DownloadLink } from './download-link';
 import { periodFor, PeriodPicker } from './period-picker';
@@ -42,6 +42,9 @@ export function TrendsScreen() {
 
   return (
     <Screen title="Trends" subtitle={`Quality of the whole team, ${period.from} to ${period.to}. Demo data is invented.`}>
+      <Link href="/trends/model" style={styles.link}>
+        Rework-risk model: how it was fitted and how well it does
+      </Link>
       <PeriodPicker weeks={weeks} rubricVersion={rubricVersion} onChange={(c) => router.setParams(c as never)} />
       {error ? <Notice tone="error">{error.message}</Notice> : null}
       {team.data ? <TechnicianTrendsView trends={team.data} search={search} /> : <Text variant="muted">Loading…</Text>}
@@ -62,3 +65,7 @@ export function TrendsScreen() {
     </Screen>
   );
 }
+
+const styles = StyleSheet.create({
+  link: { color: colors.ink, fontFamily: fonts.semibold, textDecorationLine: 'underline', minHeight: 44, paddingVertical: 10 },
+});

@@ -22,7 +22,7 @@ export function seededRandom(seed: number) {
   };
 }
 
-const STREETS = [
+export const STREETS = [
   'Orvell Lane',
   'Tessaly Row',
   'Brindmoor Road',
@@ -104,7 +104,7 @@ const QUALITY: ((t: number) => number)[] = [() => 0.93, (t) => 0.62 + 0.36 * t, 
 const REFLECTIVE_TROUBLE = 3; // Mateo keeps leaving mirrors unflagged.
 const RECAPTURE_PRONE = 4;
 
-function demoRecord(rand: () => number, technicianIndex: number, variant: number): CaptureRecord {
+export function demoRecord(rand: () => number, technicianIndex: number, variant: number): CaptureRecord {
   const cameraClass = rand() < 0.7 ? 'tripod_depth' : 'camera_360';
   const spacing = MAX_STATION_SPACING_M[cameraClass]!;
   const count = 4 + Math.floor(rand() * 5);
@@ -182,7 +182,7 @@ function demoRecord(rand: () => number, technicianIndex: number, variant: number
   };
 }
 
-function scoreRecord(rand: () => number, record: CaptureRecord, quality: number, technicianIndex: number): DemoScore[] {
+export function scoreRecord(rand: () => number, record: CaptureRecord, quality: number, technicianIndex: number): DemoScore[] {
   return DEFAULT_RUBRIC.criteria.map((c) => {
     const max = scaleMax(c.scale);
     if (!criterionApplies(c, record)) return { key: c.key, score: null, maxScore: max, comment: null, stockReason: null };
@@ -204,7 +204,7 @@ function scoreRecord(rand: () => number, record: CaptureRecord, quality: number,
   });
 }
 
-function review(
+export function review(
   rand: () => number,
   revision: number,
   reviewerIndex: number,
