@@ -44,6 +44,9 @@ export type QueueRow = {
   claimedBy: { id: number; name: string } | null;
   waitingOn: 'reviewer' | 'technician';
   pausedMs: number;
+  // Rework-risk hint for the current revision: the probability it comes back, or null while
+  // the model is withheld (not enough history). Only on queue pages.
+  risk?: number | null;
 };
 
 export type QueuePage = {

@@ -66,3 +66,15 @@ export function oddsRatios(model: Pick<RiskModelView, 'factKeys' | 'coefficients
     return { key, ratio: Math.exp(b), low: Math.exp(b - 1.96 * se), high: Math.exp(b + 1.96 * se) };
   });
 }
+
+export function riskProbability(model: RiskModelView | null, facts: number[]): number | null {
+  const hint = riskHint(model, facts);
+  return hint.kind === 'hint' ? hint.probability : null;
+}
+
+// The queue's words for a probability: never colour alone, always the number too.
+export function riskWords(probability: number | null): string {
+  if (probability === null) return '—';
+  const word = probability >= 0.5 ? 'Likely' : probability >= 0.25 ? 'Possibly' : 'Unlikely';
+  return `${word} (${Math.round(probability * 100)} %)`;
+}

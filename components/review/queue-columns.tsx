@@ -5,10 +5,11 @@ import { colors, fonts } from '@/components/ui/theme';
 import { CAMERA_CLASS_LABELS } from '@/shared/capture-record';
 import { describeDue, humanSpan, LOSS_TYPE_LABELS, PRIORITY_LABELS, PROPERTY_TYPE_LABELS } from '@/shared/jobs';
 import type { QueueRow } from '@/shared/review';
+import { riskWords } from '@/shared/risk-hint';
 
 // At 1440 px the default columns fit the page without scrolling sideways; the others are a
-// tick away under "Columns".
-export const QUEUE_HIDDEN_BY_DEFAULT = ['propertyType', 'cameraClass', 'submitted'];
+// tick away under "Columns". The revision shows in the state ("Resubmitted") by default.
+export const QUEUE_HIDDEN_BY_DEFAULT = ['propertyType', 'cameraClass', 'submitted', 'revision'];
 
 export function queueColumns(now: Date, meId: number | undefined): DataTableColumn<QueueRow>[] {
   return [
@@ -62,6 +63,14 @@ export function queueColumns(now: Date, meId: number | undefined): DataTableColu
       },
     },
     { id: 'priority', accessorFn: (r) => PRIORITY_LABELS[r.priority], header: 'Priority', meta: { width: 110 } },
+    {
+      // The rework-risk hint: words and the percentage; a dash while the model is withheld.
+      id: 'risk',
+      accessorFn: (r) => riskWords(r.risk ?? null),
+      header: 'Likely to come back',
+      enableSorting: false,
+      meta: { width: 130 },
+    },
     {
       id: 'status',
       accessorKey: 'status',

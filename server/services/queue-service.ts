@@ -1,7 +1,12 @@
+import { Op } from 'sequelize';
+
 import type { JobStatus } from '../../shared/jobs';
 import { QUEUE_STATUSES, type QueueFilters, type QueuePage, type QueueRow, type QueueSort } from '../../shared/review';
-import type { Job, User } from '../models';
+import { riskFacts } from '../../shared/risk-facts';
+import { riskProbability } from '../../shared/risk-hint';
+import { CaptureRevision, type Job, type User } from '../models';
 import { countJobs, isoTime, type JobPageQuery, pageOfJobs, resolveSearch, stateCounts } from './job-page-query';
+import { latestRiskModel } from './risk-model-service';
 
 type Actor = Express.User;
 
@@ -170,5 +175,22 @@ export async function listQueue(actor: Actor, params: QueueParamsIn): Promise<Qu
   // The unfiltered queue's size is the sum of its states' counts: no second count needed.
   const total = wholeQueue ? DEFAULT_STATUSES.reduce((sum, s) => sum + (counts[s] ?? 0), 0) : await countJobs(page);
   const now = new Date();
-  return { rows: rows.map((r) => queueRowFrom(r, now)), total, page: params.page, pageSize: params.pageSize, counts };
+  const withRisk = await withRiskHints(rows.map((r) => queueRowFrom(r, now)));
+  return { rows: withRisk, total, page: params.page, pageSize: params.pageSize, counts };
+}
+
+// The page's records scored by the model in use (one read of their current revisions).
+async function withRiskHints(rows: QueueRow[]): Promise<QueueRow[]> {
+  const model = await latestRiskModel();
+  if (!model?.usable || rows.length === 0) return rows.map((r) => ({ ...r, risk: null }));
+  const revisions = await CaptureRevision.findAll({
+    where: { [Op.or]: rows.map((r) => ({ jobId: r.id, number: r.revision })) },
+    attributes: ['jobId', 'number', 'data', 'stationAnalysis'],
+  });
+  const byJob = new Map(revisions.map((rev) => [rev.jobId, rev]));
+  return rows.map((r) => {
+    const rev = byJob.get(r.id);
+    const facts = rev ? riskFacts(rev.data, rev.stationAnalysis, { lossType: r.lossType, propertyType: r.propertyType }, r.revision) : null;
+    return { ...r, risk: facts ? riskProbability(model, facts) : null };
+  });
 }

@@ -56,6 +56,23 @@ it('rises when a mirror is left unflagged and falls when it is flagged', async (
   }
 });
 
+it('gives reviewers a "Likely to come back" column in the queue, in words and a percentage', async () => {
+  const browser = await launchBrowser(DESKTOP);
+  const page = await browser.newPage();
+  try {
+    await signIn(page, demoPerson('ravi.').email, DEMO_PASSWORD);
+    await page.waitForURL(`${BASE_URL}/queue`);
+    await page.getByRole('columnheader', { name: /Likely to come back/ }).waitFor();
+    await page
+      .getByRole('cell')
+      .filter({ hasText: /^(Likely|Possibly|Unlikely) \(\d+ %\)$/ })
+      .first()
+      .waitFor();
+  } finally {
+    await browser.close();
+  }
+});
+
 it("shows the manager the model's figures, calibration and odds ratios", async () => {
   const browser = await launchBrowser(DESKTOP);
   const page = await browser.newPage();

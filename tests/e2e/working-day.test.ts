@@ -44,18 +44,26 @@ describe('at 1440 × 900', () => {
     await page.getByRole('table', { name: 'Review queue' }).getByRole('row').nth(1).waitFor();
     const edges = await headerEdges(page, 'Review queue');
     expect(edges.map(([h]) => h)).toEqual(
-      expect.arrayContaining(['Claim', 'Technician', 'Due / time left', 'Priority', 'State · whose turn', 'Claimed by']),
+      expect.arrayContaining([
+        'Claim',
+        'Technician',
+        'Due / time left',
+        'Priority',
+        'Likely to come back',
+        'State · whose turn',
+        'Claimed by',
+      ]),
     );
     for (const [header, right] of edges) expect([header, right <= DESKTOP.width]).toEqual([header, true]);
     expect(await scrollsSideways(page, 'table', 'Review queue')).toBe(false);
     await screenshot(page, 'queue-default-columns-desktop');
 
-    await page.getByRole('button', { name: 'Columns (3 hidden)' }).click();
+    await page.getByRole('button', { name: 'Columns (4 hidden)' }).click();
     await page.getByRole('checkbox', { name: 'Camera' }).click();
     await page.getByRole('columnheader', { name: /Camera/ }).waitFor();
     await page.reload();
     await page.getByRole('columnheader', { name: /Camera/ }).waitFor();
-    await expect(page.getByRole('button', { name: 'Columns (2 hidden)' }).count()).resolves.toBe(1);
+    await expect(page.getByRole('button', { name: 'Columns (3 hidden)' }).count()).resolves.toBe(1);
   });
 
   it("shows every column of the admin's Users table, the status and the action included", async () => {

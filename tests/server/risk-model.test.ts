@@ -75,6 +75,39 @@ describe('fitting the model', () => {
   });
 });
 
+describe('the queue', () => {
+  it('gives each row the probability of coming back while a usable model is in use, and none otherwise', async () => {
+    const job = await createSubmittedJob({
+      record: completeRecord({ rooms: [room({ reflective: [{ kind: 'mirror', found: 2, flagged: 0 }] })] }),
+    });
+    const { agent } = await signedInAgent(app, 'reviewer');
+    const rowOf = async () =>
+      (await agent.get(`/api/queue?q=${job.claimReference}`)).body.rows.find((r: { id: number }) => r.id === job.id);
+    const model = await RiskModel.create({
+      fittedAt: new Date(),
+      reviews: 500,
+      factKeys: ['unflaggedReflective'],
+      coefficients: [-2, 1],
+      standardErrors: [0.1, 0.1],
+      figures: { trained: 400, tested: 100, auc: { estimate: 0.8, se: 0.04, low: 0.72, high: 0.88 }, brier: 0.15, reliability: [] },
+      usable: true,
+      withheld: null,
+    });
+    try {
+      // logit = −2 + 1 × 2 unflagged mirrors = 0 → 50 %.
+      expect((await rowOf()).risk).toBeCloseTo(0.5, 10);
+    } finally {
+      await model.destroy();
+    }
+    const withheld = await RiskModel.create({ ...model.get(), version: undefined, usable: false, withheld: 'Not enough history yet.' });
+    try {
+      expect((await rowOf()).risk).toBeNull();
+    } finally {
+      await withheld.destroy();
+    }
+  });
+});
+
 describe('the routes', () => {
   it('gives every role the newest model, and lets a manager refit', async () => {
     for (const role of ['technician', 'reviewer', 'admin'] as const) {
