@@ -16,7 +16,7 @@ export const DECISION_LABELS: Record<Decision, string> = {
 };
 
 export const QUEUE_STATUSES: JobStatus[] = ['submitted', 'in_review', 'resubmitted', 'rework_requested'];
-export const QUEUE_SORTS = ['due', 'submitted', 'claim', 'technician', 'priority', 'revision'] as const;
+export const QUEUE_SORTS = ['due', 'submitted', 'claim', 'technician', 'priority', 'revision', 'risk'] as const;
 export type QueueSort = (typeof QUEUE_SORTS)[number];
 
 export type QueueFilters = {
@@ -45,8 +45,8 @@ export type QueueRow = {
   waitingOn: 'reviewer' | 'technician';
   pausedMs: number;
   // Rework-risk hint for the current revision: the probability it comes back, or null while
-  // the model is withheld (not enough history). Only on queue pages.
-  risk?: number | null;
+  // the model is withheld (not enough history).
+  risk: number | null;
 };
 
 export type QueuePage = {

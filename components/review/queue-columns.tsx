@@ -66,9 +66,8 @@ export function queueColumns(now: Date, meId: number | undefined): DataTableColu
     {
       // The rework-risk hint: words and the percentage; a dash while the model is withheld.
       id: 'risk',
-      accessorFn: (r) => riskWords(r.risk ?? null),
+      accessorFn: (r) => riskWords(r.risk),
       header: 'Likely to come back',
-      enableSorting: false,
       meta: { width: 130 },
     },
     {

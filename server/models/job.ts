@@ -43,6 +43,8 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
   declare effectiveDueAt: Date;
   declare pausedAt: Date | null;
   declare pausedMs: CreationOptional<number>;
+  // The rework-risk model's probability for the current revision (null while it is withheld).
+  declare riskProbability: CreationOptional<number | null>;
   declare claimedById: number | null;
   declare claimedAt: Date | null;
   declare claimExpiresAt: Date | null;
@@ -79,6 +81,7 @@ export class Job extends Model<InferAttributes<Job>, InferCreationAttributes<Job
         effectiveDueAt: { type: DataTypes.DATE(3), allowNull: false },
         pausedAt: { type: DataTypes.DATE(3), allowNull: true },
         pausedMs: numericColumn(DataTypes.BIGINT.UNSIGNED, 'pausedMs', { defaultValue: 0 }),
+        riskProbability: numericColumn(DataTypes.DECIMAL(6, 5), 'riskProbability', { allowNull: true }),
         claimedById: { type: DataTypes.INTEGER.UNSIGNED, allowNull: true },
         claimedAt: { type: DataTypes.DATE(3), allowNull: true },
         claimExpiresAt: { type: DataTypes.DATE(3), allowNull: true },

@@ -11,6 +11,7 @@ import { CaptureDraft, CaptureRevision, StoredFile } from '../models';
 import { recordEvent } from './audit-service';
 import { assertAssignedTechnician, findJobFor } from './job-access';
 import { assertReworkAnswered } from './rework-service';
+import { riskOfRecord } from './risk-model-service';
 import { analyseAttachedFile } from './station-service';
 import { planOfJob } from './visit-plan-service';
 
@@ -103,6 +104,7 @@ export async function submitRecord(actor: Actor, jobId: number, record: CaptureR
     job.currentRevision = number;
     job.cameraClass = record.cameraClass;
     job.submittedAt = submittedAt;
+    job.riskProbability = await riskOfRecord(record, stationAnalysis, job, number, transaction);
     resumeDueClock(job, submittedAt);
     await job.save({ transaction });
     await recordEvent(transaction, jobId, actor.id, 'submitted', { revision: number, warnings: findings.warnings.length });

@@ -1,12 +1,7 @@
-import { Op } from 'sequelize';
-
 import type { JobStatus } from '../../shared/jobs';
 import { QUEUE_STATUSES, type QueueFilters, type QueuePage, type QueueRow, type QueueSort } from '../../shared/review';
-import { riskFacts } from '../../shared/risk-facts';
-import { riskProbability } from '../../shared/risk-hint';
-import { CaptureRevision, type Job, type User } from '../models';
+import type { Job, User } from '../models';
 import { countJobs, isoTime, type JobPageQuery, pageOfJobs, resolveSearch, stateCounts } from './job-page-query';
-import { latestRiskModel } from './risk-model-service';
 
 type Actor = Express.User;
 
@@ -33,6 +28,7 @@ export function toQueueRow(job: Job, now = new Date()): QueueRow {
     claimedBy: activeClaim(job, now) && claimant ? { id: claimant.id, name: claimant.name } : null,
     waitingOn: job.status === 'rework_requested' ? 'technician' : 'reviewer',
     pausedMs: job.pausedMs,
+    risk: job.riskProbability ?? null,
   };
 }
 
@@ -44,6 +40,7 @@ const QUEUE_ORDERS: Record<QueueSort, { columns: string[]; index: string }> = {
   technician: { columns: ['technician_name', 'effective_due_at', 'id'], index: 'jobs_queue_technician_name' },
   priority: { columns: ['priority_rank', 'effective_due_at', 'id'], index: 'jobs_queue_priority' },
   revision: { columns: ['current_revision', 'effective_due_at', 'id'], index: 'jobs_queue_revision' },
+  risk: { columns: ['risk_probability', 'effective_due_at', 'id'], index: 'jobs_queue_risk' },
 };
 
 // Every column of an order runs the same way, so one index serves it, read forwards or
@@ -125,7 +122,7 @@ async function queueStateCounts() {
 
 // The queue page's columns and joins: everything a row shows, in the one statement.
 export const QUEUE_SELECT = `j.id, j.claim_reference, j.property_type, j.loss_type, j.camera_class, j.current_revision, j.submitted_at,
-  j.effective_due_at, j.priority, j.status, j.paused_ms, j.claimed_by_id, j.claim_expires_at,
+  j.effective_due_at, j.priority, j.status, j.paused_ms, j.claimed_by_id, j.claim_expires_at, j.risk_probability,
   t.id AS technician_id, t.name AS technician_name, c.name AS claimed_by_name`;
 export const QUEUE_JOINS = 'JOIN users t ON t.id = j.technician_id LEFT JOIN users c ON c.id = j.claimed_by_id';
 type QueueSqlRow = {
@@ -145,6 +142,7 @@ type QueueSqlRow = {
   technician_id: number;
   technician_name: string;
   claimed_by_name: string | null;
+  risk_probability: string | number | null;
 };
 
 function queueRowFrom(r: QueueSqlRow, now: Date): QueueRow {
@@ -164,6 +162,7 @@ function queueRowFrom(r: QueueSqlRow, now: Date): QueueRow {
     claimedBy: claimed && r.claimed_by_name !== null ? { id: Number(r.claimed_by_id), name: r.claimed_by_name } : null,
     waitingOn: r.status === 'rework_requested' ? 'technician' : 'reviewer',
     pausedMs: Number(r.paused_ms),
+    risk: r.risk_probability === null ? null : Number(r.risk_probability),
   };
 }
 
@@ -175,22 +174,5 @@ export async function listQueue(actor: Actor, params: QueueParamsIn): Promise<Qu
   // The unfiltered queue's size is the sum of its states' counts: no second count needed.
   const total = wholeQueue ? DEFAULT_STATUSES.reduce((sum, s) => sum + (counts[s] ?? 0), 0) : await countJobs(page);
   const now = new Date();
-  const withRisk = await withRiskHints(rows.map((r) => queueRowFrom(r, now)));
-  return { rows: withRisk, total, page: params.page, pageSize: params.pageSize, counts };
-}
-
-// The page's records scored by the model in use (one read of their current revisions).
-async function withRiskHints(rows: QueueRow[]): Promise<QueueRow[]> {
-  const model = await latestRiskModel();
-  if (!model?.usable || rows.length === 0) return rows.map((r) => ({ ...r, risk: null }));
-  const revisions = await CaptureRevision.findAll({
-    where: { [Op.or]: rows.map((r) => ({ jobId: r.id, number: r.revision })) },
-    attributes: ['jobId', 'number', 'data', 'stationAnalysis'],
-  });
-  const byJob = new Map(revisions.map((rev) => [rev.jobId, rev]));
-  return rows.map((r) => {
-    const rev = byJob.get(r.id);
-    const facts = rev ? riskFacts(rev.data, rev.stationAnalysis, { lossType: r.lossType, propertyType: r.propertyType }, r.revision) : null;
-    return { ...r, risk: facts ? riskProbability(model, facts) : null };
-  });
+  return { rows: rows.map((r) => queueRowFrom(r, now)), total, page: params.page, pageSize: params.pageSize, counts };
 }

@@ -68,6 +68,13 @@ it('gives reviewers a "Likely to come back" column in the queue, in words and a 
       .filter({ hasText: /^(Likely|Possibly|Unlikely) \(\d+ %\)$/ })
       .first()
       .waitFor();
+    // Sortable like every queue column, from the server (the whole queue, not the page).
+    await page
+      .getByRole('columnheader', { name: /Likely to come back/ })
+      .getByRole('button')
+      .click();
+    await page.waitForURL(/sort=risk/);
+    await screenshot(page, 'risk-queue-column-desktop');
   } finally {
     await browser.close();
   }

@@ -6,7 +6,7 @@ import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/app';
 import { config } from '../../server/config';
 import { RiskModel, sequelize } from '../../server/models';
-import { fitAndStoreRiskModel, refitRiskModelIfDue } from '../../server/services/risk-model-service';
+import { fitAndStoreRiskModel, refitRiskModelIfDue, rescoreQueue } from '../../server/services/risk-model-service';
 import { createReview, createSubmittedJob, createUser } from '../helpers/factories';
 import { resetSignInLimits, signedInAgent } from '../helpers/http';
 import { completeRecord, room } from '../helpers/records';
@@ -83,6 +83,7 @@ describe('the queue', () => {
     const { agent } = await signedInAgent(app, 'reviewer');
     const rowOf = async () =>
       (await agent.get(`/api/queue?q=${job.claimReference}`)).body.rows.find((r: { id: number }) => r.id === job.id);
+    // A stand-in model: one fact, one coefficient.
     const model = await RiskModel.create({
       fittedAt: new Date(),
       reviews: 500,
@@ -94,17 +95,17 @@ describe('the queue', () => {
       withheld: null,
     });
     try {
+      await rescoreQueue(model.toView());
       // logit = −2 + 1 × 2 unflagged mirrors = 0 → 50 %.
-      expect((await rowOf()).risk).toBeCloseTo(0.5, 10);
+      expect((await rowOf()).risk).toBeCloseTo(0.5, 5);
+      // Sorted by it, most likely first, from its own index (see the index-use test).
+      const sorted = (await agent.get('/api/queue?sort=risk&dir=desc&pageSize=5')).body.rows;
+      expect(sorted[0].risk).toBeGreaterThanOrEqual(0.5);
     } finally {
       await model.destroy();
     }
-    const withheld = await RiskModel.create({ ...model.get(), version: undefined, usable: false, withheld: 'Not enough history yet.' });
-    try {
-      expect((await rowOf()).risk).toBeNull();
-    } finally {
-      await withheld.destroy();
-    }
+    await rescoreQueue(null);
+    expect((await rowOf()).risk).toBeNull();
   });
 });
 
