@@ -4,10 +4,10 @@ import { QueryTypes, type Transaction } from 'sequelize';
 
 import type { CaptureRecord } from '../../shared/capture-record';
 import type { LossType, PropertyType } from '../../shared/jobs';
+import { QUEUE_STATUSES } from '../../shared/review';
 import { riskFacts } from '../../shared/risk-facts';
 import { fitRiskModel, type TrainingRow } from '../../shared/risk-fit';
-import { QUEUE_STATUSES } from '../../shared/review';
-import { riskProbability, type RiskModelView } from '../../shared/risk-hint';
+import { type RiskModelView,riskProbability } from '../../shared/risk-hint';
 import type { StationAnalysis } from '../../shared/station-analysis';
 import { config } from '../config';
 import { sequelize } from '../db';
