@@ -7,7 +7,7 @@ import type { LossType, PropertyType } from '../../shared/jobs';
 import { QUEUE_STATUSES } from '../../shared/review';
 import { riskFacts } from '../../shared/risk-facts';
 import { fitRiskModel, type TrainingRow } from '../../shared/risk-fit';
-import { type RiskModelView,riskProbability } from '../../shared/risk-hint';
+import { type RiskModelView, riskProbability } from '../../shared/risk-hint';
 import type { StationAnalysis } from '../../shared/station-analysis';
 import { config } from '../config';
 import { sequelize } from '../db';
