@@ -30,8 +30,16 @@ export type SummaryInput = {
     links: { from: number; to: number; weak: boolean }[];
   }[];
   review: { score: number | null; passMark: number; reviewerName: string; decidedAt: string };
-  photos: { id: number; name: string }[];
+  photos: SummaryPhotoRef[];
 };
+
+// A photo as the summary names it: its file name and the technician's caption, if any.
+export type SummaryPhotoRef = { id: number; name: string; caption?: string | null };
+
+// How the summary labels a photo: the caption first, since it says what the photo shows.
+export function photoLabel(photo: SummaryPhotoRef): string {
+  return photo.caption?.trim() ? `${photo.caption.trim()} (${photo.name})` : photo.name;
+}
 
 export type DeliverySummary = {
   claimReference: string;
@@ -45,7 +53,7 @@ export type DeliverySummary = {
   models: { structure: string; reference: string; split: string | null }[];
   levels: { level: string; stations: number; rooms: { name: string; size: string; stations: number; doorway: boolean }[] }[];
   plans: SummaryInput['plans'];
-  damage: { room: string; description: string; stations: string; photos: { id: number; name: string }[] }[];
+  damage: { room: string; description: string; stations: string; photos: SummaryPhotoRef[] }[];
   gaps: { location: string; cause: string; resolved: boolean; note: string }[];
   reflective: { room: string; kind: string; found: number; flagged: number }[];
   hazards: string[];

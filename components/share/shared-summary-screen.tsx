@@ -7,7 +7,7 @@ import { Notice } from '@/components/ui/notice';
 import { Text } from '@/components/ui/text';
 import { colors, fonts, space, WIDE_BREAKPOINT } from '@/components/ui/theme';
 import { LEVEL_LABELS } from '@/shared/capture-record';
-import type { DeliverySummary } from '@/shared/delivery-summary';
+import { type DeliverySummary, photoLabel } from '@/shared/delivery-summary';
 
 const PlanSketch = lazyView(() => import('./plan-sketch').then((m) => m.default), 'the station plan');
 
@@ -114,13 +114,15 @@ function Summary({ token, summary, pdf, wide }: { token: string; summary: Delive
               <View key={d.room + d.description} style={{ gap: space.xs }}>
                 <Bullet>{`${d.room}: ${d.description}. ${d.stations}.`}</Bullet>
                 {d.photos.map((p) => (
-                  <Image
-                    key={p.id}
-                    source={{ uri: `/api/share/${token}/photos/${p.id}` }}
-                    style={styles.photo}
-                    resizeMode="contain"
-                    accessibilityLabel={`Photo: ${p.name}`}
-                  />
+                  <View key={p.id} style={{ gap: space.xs }}>
+                    <Image
+                      source={{ uri: `/api/share/${token}/photos/${p.id}` }}
+                      style={styles.photo}
+                      resizeMode="contain"
+                      accessibilityLabel={`Photo: ${photoLabel(p)}`}
+                    />
+                    <Text variant="small">{photoLabel(p)}</Text>
+                  </View>
                 ))}
               </View>
             ))}

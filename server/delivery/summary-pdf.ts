@@ -5,7 +5,7 @@ import path from 'node:path';
 
 import PDFDocument from 'pdfkit';
 
-import type { DeliverySummary } from '../../shared/delivery-summary';
+import { type DeliverySummary, photoLabel } from '../../shared/delivery-summary';
 
 const FONT_DIR = path.dirname(require.resolve('@expo-google-fonts/public-sans/package.json'));
 const REGULAR = path.join(FONT_DIR, '400Regular', 'PublicSans_400Regular.ttf');
@@ -87,8 +87,12 @@ export function renderSummaryPdf(summary: DeliverySummary, photos: SummaryPhoto[
       if (photo?.jpegOrPng) {
         if (doc.y > doc.page.height - 220) doc.addPage();
         doc.image(photo.jpegOrPng, { fit: [220, 160] }).moveDown(0.2);
-        doc.fillColor(MUTED).text(p.name).fillColor(INK);
-      } else doc.fillColor(MUTED).text(`Photo ${p.name}: open it on the shared page.`).fillColor(INK);
+        doc.fillColor(MUTED).text(photoLabel(p)).fillColor(INK);
+      } else
+        doc
+          .fillColor(MUTED)
+          .text(`Photo ${photoLabel(p)}: open it on the shared page.`)
+          .fillColor(INK);
     }
   }
 

@@ -103,7 +103,7 @@ export async function summaryInputFor(jobId: number): Promise<SummaryInput & { t
       reviewerName: reviewer?.name ?? 'Reviewer',
       decidedAt: review.decidedAt.toISOString(),
     },
-    photos: photos.map((p) => ({ id: p.id, name: p.originalName })),
+    photos: photos.map((p) => ({ id: p.id, name: p.originalName, caption: p.caption ?? null })),
   };
 }
 

@@ -126,6 +126,7 @@ async function acceptedJobWithAdjuster() {
   const technician = await createUser({ role: 'technician', name: 'Tobin Ashgrove' });
   const job = await createJob({ technicianId: technician.id });
   const photo = await createStoredFile(job.id, technician.id, { originalName: 'sink.png', sizeBytes: PNG_1X1.length });
+  await photo.update({ caption: 'Swollen cabinet base under the sink' });
   await putObject(photo.storageKey, PNG_1X1, 'image/png', photo.sha256);
   const record = deliveredRecord(photo.id);
   const submittedAt = new Date();
@@ -208,6 +209,8 @@ describe('on acceptance', () => {
       'Bathroom: 1 mirror(s) not flagged',
       'Station plan',
       'it is not a survey',
+      // The technician's caption names the photo.
+      'Swollen cabinet base under the sink (sink.png)',
     ]) {
       expect({ fact, found: text.includes(fact) }).toEqual({ fact, found: true });
     }
@@ -231,6 +234,9 @@ describe('on acceptance', () => {
     const page = await anonymous.get(`/api/share/${shareToken}`);
     expect(page.status).toBe(200);
     expect(page.body.summary).toMatchObject({ claimReference: accepted.job.claimReference, client: CONTACTS.clientName });
+    expect(page.body.summary.damage[0].photos).toEqual([
+      { id: accepted.photo.id, name: 'sink.png', caption: 'Swollen cabinet base under the sink' },
+    ]);
     expect(JSON.stringify(page.body)).not.toMatch(/Needs another station|comment|reviewerId|email/i);
     const pdf = await anonymous.get(`/api/share/${shareToken}/summary.pdf`).buffer(true);
     expect(pdf.status).toBe(200);
