@@ -120,6 +120,7 @@ describe('bulk moves', () => {
     browser = opened.browser;
     const { page } = opened;
     await page.getByRole('checkbox', { name: `Select ${refs[0]}` }).click();
+    await page.getByRole('checkbox', { name: `Select ${refs[0]}`, checked: true }).waitFor();
     await page.getByRole('checkbox', { name: `Select ${refs[2]}` }).click({ modifiers: ['Shift'] });
     await page.getByText('3 selected (shift-click selects a range)').waitFor();
     expect(new URL(page.url()).pathname).toBe('/jobs');
@@ -144,8 +145,11 @@ describe('bulk moves', () => {
     const opened = await openAs(DESKTOP, 'mara.', `/queue?q=GIVE-${stamp}`);
     browser = opened.browser;
     const { page } = opened;
+    // Each tick is seen before the next, so the shift-click has its anchor.
     await page.getByRole('checkbox', { name: `Select ${refs[0]}` }).click();
+    await page.getByRole('checkbox', { name: `Select ${refs[0]}`, checked: true }).waitFor();
     await page.getByRole('checkbox', { name: `Select ${refs[1]}` }).click({ modifiers: ['Shift'] });
+    await page.getByRole('checkbox', { name: `Select ${refs[1]}`, checked: true }).waitFor();
     await page.getByLabel('Give to reviewer').selectOption({ label: demoPerson('hana.').name });
     await page.getByRole('button', { name: `Give 2 to ${demoPerson('hana.').name}` }).click();
     await page.getByText(`2 records given to ${demoPerson('hana.').name}.`).waitFor();
