@@ -122,6 +122,8 @@ export type DetachedStructure = {
   structure: Structure;
   modelKey: string | null;
   noModelReason: string;
+  // Footprint, when measured: a client's rule may cover only structures over a given area.
+  areaM2?: number | null;
 };
 
 export type CoverageGap = { key: string; location: string; cause: GapCause; resolved: boolean; note: string };

@@ -10,6 +10,8 @@ import {
   roomAreaM2,
   roomStationSum,
 } from './capture-record';
+import type { Requirement } from './client-programme';
+import { evaluateRequirements, type RequirementFacts, requirementFinding, spacingOverrideM } from './client-requirements';
 import { planWarnings } from './plan-record';
 import { expectedStations, MAX_STATION_SPACING_M } from './station-spacing';
 import { AREA_LABEL, fromMetres, fromSquareMetres, roundTo } from './units';
@@ -25,6 +27,8 @@ export type CheckContext = {
   stationFileLevels?: { level: LevelKind; stations: number }[] | null;
   // The visit plan, when one was made: what it expected and the record lacks is a warning.
   plan?: VisitPlan | null;
+  // The client's programme under which the job was created: its failing rules block or warn.
+  client?: { name: string; requirements: Requirement[]; facts: RequirementFacts } | null;
 };
 
 // A processing confirmation counts only for the revision it was made for: one made before
@@ -87,7 +91,9 @@ export function checkCaptureRecord(record: CaptureRecord, context: CheckContext 
     if (!gap.location.trim()) need(`gaps.${i}.location`, 'Say where the gap is.');
   });
 
-  const spacing = record.cameraClass ? MAX_STATION_SPACING_M[record.cameraClass] : null;
+  // A client's spacing rule replaces the camera class's spacing: its own finding covers the rooms.
+  const override = context.client ? spacingOverrideM(context.client.requirements) : null;
+  const spacing = record.cameraClass && override === null ? MAX_STATION_SPACING_M[record.cameraClass] : null;
   record.rooms.forEach((room, i) => {
     const label = room.name.trim() || `Room ${i + 1}`;
     const area = roomAreaM2(room);
@@ -149,5 +155,12 @@ export function checkCaptureRecord(record: CaptureRecord, context: CheckContext 
   });
 
   warnings.push(...planWarnings(record, context.plan ?? null));
+  if (context.client) {
+    const { name, requirements, facts } = context.client;
+    for (const result of evaluateRequirements(requirements, record, { ...facts, plan: facts.plan ?? context.plan })) {
+      if (result.status !== 'fail') continue;
+      (result.severity === 'blocking' ? missing : warnings).push(requirementFinding(name, result));
+    }
+  }
   return { missing, warnings };
 }

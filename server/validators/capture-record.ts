@@ -73,6 +73,7 @@ export const captureRecordRules = [
   body('detachedStructures.*.structure', oneOf(STRUCTURES)).isIn(STRUCTURES),
   body('detachedStructures.*.modelKey', 'Missing model key').optional({ values: 'null' }).isString().isLength({ max: 40 }),
   text('detachedStructures.*.noModelReason', 500),
+  optionalMeasure('detachedStructures.*.areaM2', 5000),
 
   body('gaps', 'A list of at most 100 gaps').isArray({ max: 100 }),
   key('gaps.*.key'),
